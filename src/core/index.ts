@@ -1,0 +1,18 @@
+/**
+ * Tankwright core: the public API. Pure functions, SI units in and out.
+ * Each module's header states the model it implements and its sources.
+ */
+export { DesignError, isDesignError, requirePositive, requireNonNegative } from './errors';
+export * from './constants';
+export { note } from './notes';
+export type { DesignNote, NoteLevel } from './notes';
+export {
+  resonantFrequency,
+  inductanceForFrequency,
+  capacitanceForFrequency,
+  inductiveReactance,
+  capacitiveReactance,
+  characteristicImpedance,
+} from './resonance';
+export { E_SERIES, preferredNeighbours } from './preferred';
+export type { ESeriesName, PreferredNeighbours } from './preferred';
