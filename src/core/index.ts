@@ -16,3 +16,4 @@ export {
 } from './resonance';
 export { E_SERIES, preferredNeighbours } from './preferred';
 export type { ESeriesName, PreferredNeighbours } from './preferred';
+export { ellipticK, ellipticE, ellipticD } from './elliptic';
