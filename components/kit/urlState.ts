@@ -1,0 +1,99 @@
+/**
+ * A workbench's inputs in the query string, so a design can be bookmarked and
+ * shared. Values are kept as the text a person typed ("4u7", "2*47p").
+ *
+ * Reading is defensive: a link can come from anywhere. Unknown keys, values
+ * that are too long, carry characters no quantity has, name functions other
+ * than sqrt/pi, or do not parse, are ignored and listed as notices the bench
+ * shows as plain text (never as markup). Nothing read from the URL can crash
+ * the page or reach innerHTML.
+ */
+import { looksLikeExpression, parseQuantity, type QuantityUnit } from '../../src/quantity';
+
+export type UrlFieldSpec =
+  | { kind: 'quantity'; unit: QuantityUnit; label: string }
+  | { kind: 'choice'; options: readonly string[]; label: string };
+
+export type UrlSchema = Record<string, UrlFieldSpec>;
+
+export interface DecodedState {
+  values: Record<string, string>;
+  notices: string[];
+}
+
+/** Longest value accepted from a link. */
+export const MAX_URL_VALUE = 120;
+/** At most this many parameters are looked at. */
+const MAX_PARAMS = 40;
+
+const ALLOWED_CHARS = /^[0-9A-Za-z .+\-*/^()µμΩΩ"]*$/u;
+const NUMBER_TOKEN = /\d[\d.]*(?:[eE][+-]?\d+)?[A-Za-zµμΩΩ"]*\d*/gu;
+const ALLOWED_WORDS = new Set(['pi', 'sqrt']);
+
+function shown(text: string): string {
+  const clean = text.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
+  return clean.length > 24 ? `${clean.slice(0, 24)}…` : clean;
+}
+
+/** Why a link value for a quantity field is refused, or null when it is acceptable. */
+export function refuseQuantityText(text: string, unit: QuantityUnit): string | null {
+  if (text.length > MAX_URL_VALUE) return `longer than ${MAX_URL_VALUE} characters`;
+  if (!ALLOWED_CHARS.test(text)) return 'contains characters no quantity uses';
+  if (looksLikeExpression(text)) {
+    const words = text.replace(NUMBER_TOKEN, ' ').match(/[A-Za-zµμΩΩ]+/gu) ?? [];
+    const bad = words.find((w) => !ALLOWED_WORDS.has(w));
+    return bad ? `uses "${shown(bad)}", which is not allowed in a link` : null;
+  }
+  try {
+    parseQuantity(text, unit);
+    return null;
+  } catch (e) {
+    return e instanceof Error ? e.message : 'is not a value';
+  }
+}
+
+/** Reads the values a schema knows from a query string. */
+export function decodeState(search: string, schema: UrlSchema): DecodedState {
+  const values: Record<string, string> = {};
+  const notices: string[] = [];
+  let params: URLSearchParams;
+  try {
+    params = new URLSearchParams(search);
+  } catch {
+    return { values, notices: ['The link’s settings could not be read and were ignored.'] };
+  }
+  let seen = 0;
+  const unknown: string[] = [];
+  for (const [key, raw] of params) {
+    if (++seen > MAX_PARAMS) {
+      notices.push(`The link has more than ${MAX_PARAMS} settings; the rest were ignored.`);
+      break;
+    }
+    const spec = Object.prototype.hasOwnProperty.call(schema, key) ? schema[key] : undefined;
+    if (!spec) {
+      unknown.push(shown(key));
+      continue;
+    }
+    const text = raw.trim();
+    if (spec.kind === 'choice') {
+      if (spec.options.includes(text)) values[key] = text;
+      else notices.push(`Ignored the link’s “${spec.label}” setting “${shown(text)}”: expected one of ${spec.options.join(', ')}.`);
+      continue;
+    }
+    const why = refuseQuantityText(text, spec.unit);
+    if (why === null) values[key] = text;
+    else notices.push(`Ignored the link’s value for ${spec.label} (“${shown(text)}”): ${why}`);
+  }
+  if (unknown.length) notices.push(`Ignored unknown link setting${unknown.length > 1 ? 's' : ''}: ${unknown.slice(0, 5).join(', ')}${unknown.length > 5 ? ', …' : ''}.`);
+  return { values, notices };
+}
+
+/** The query string (without "?") for the given values, in schema order. */
+export function encodeState(values: Record<string, string>, schema: UrlSchema): string {
+  const params = new URLSearchParams();
+  for (const key of Object.keys(schema)) {
+    const v = values[key];
+    if (v !== undefined && v.trim() !== '') params.set(key, v.trim());
+  }
+  return params.toString();
+}

@@ -1,0 +1,12 @@
+/** Site navigation. A workbench appears here only once it is built. */
+export interface NavItem {
+  href: string;
+  label: string;
+}
+
+export const NAV: readonly NavItem[] = [
+  { href: '/', label: 'Home' },
+  { href: '/resonance/', label: 'Resonance' },
+  { href: '/methods/', label: 'Methods' },
+  { href: '/cautions/', label: 'Cautions' },
+];

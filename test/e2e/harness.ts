@@ -1,0 +1,87 @@
+/**
+ * Browser test harness: serves the built site (dist/) on a free loopback port
+ * and drives the system Chromium with playwright-core. No mocks of the core.
+ */
+import { createServer, type Server } from 'node:http';
+import { existsSync, readFileSync, statSync } from 'node:fs';
+import { extname, join, normalize, resolve } from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromiumPath, requireTool } from '../helpers/tools';
+
+export const DIST = resolve(import.meta.dirname, '../../dist');
+
+const TYPES: Record<string, string> = {
+  '.html': 'text/html; charset=utf-8', '.js': 'text/javascript; charset=utf-8', '.mjs': 'text/javascript; charset=utf-8',
+  '.css': 'text/css; charset=utf-8', '.svg': 'image/svg+xml', '.json': 'application/json', '.woff2': 'font/woff2',
+  '.woff': 'font/woff', '.ttf': 'font/ttf', '.png': 'image/png', '.txt': 'text/plain; charset=utf-8', '.csv': 'text/csv',
+  '.webmanifest': 'application/manifest+json', '.xml': 'application/xml',
+};
+
+function fileFor(urlPath: string): string | undefined {
+  const clean = normalize(decodeURIComponent(urlPath.split('?')[0])).replace(/^(\.\.[/\\])+/, '');
+  let p = join(DIST, clean);
+  if (!p.startsWith(DIST)) return undefined;
+  if (existsSync(p) && statSync(p).isDirectory()) p = join(p, 'index.html');
+  else if (!existsSync(p) && existsSync(`${p}.html`)) p = `${p}.html`;
+  return existsSync(p) ? p : undefined;
+}
+
+export interface Site {
+  origin: string;
+  close(): Promise<void>;
+}
+
+/** Serves dist/ on 127.0.0.1 at a free port. */
+export async function serveSite(): Promise<Site> {
+  if (!existsSync(join(DIST, 'index.html'))) {
+    throw new Error('dist/ is missing: run `npm run build` first (npm test does it for you).');
+  }
+  const server: Server = createServer((req, res) => {
+    const file = fileFor(req.url ?? '/');
+    if (!file) {
+      const notFound = join(DIST, '404.html');
+      res.writeHead(404, { 'content-type': TYPES['.html'] });
+      res.end(existsSync(notFound) ? readFileSync(notFound) : 'not found');
+      return;
+    }
+    res.writeHead(200, { 'content-type': TYPES[extname(file)] ?? 'application/octet-stream' });
+    res.end(readFileSync(file));
+  });
+  await new Promise<void>((ok) => server.listen(0, '127.0.0.1', ok));
+  const address = server.address();
+  if (!address || typeof address === 'string') throw new Error('server did not bind');
+  return {
+    origin: `http://127.0.0.1:${address.port}`,
+    close: () => new Promise((ok) => server.close(() => ok())),
+  };
+}
+
+export const CHROMIUM_ARGS = [
+  '--headless=new', '--no-sandbox', '--disable-gpu', '--disable-dev-shm-usage', '--disable-quic',
+  '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run',
+];
+
+/** True when browser tests can run; in CI a missing Chromium fails. */
+export function browserAvailable(): boolean {
+  return requireTool('chromium', chromiumPath() !== undefined, 'apt-get install -y chromium, or set CHROME_PATH');
+}
+
+export async function launch(): Promise<Browser> {
+  return chromium.launch({ executablePath: chromiumPath(), args: CHROMIUM_ARGS, headless: true });
+}
+
+/** Page that records console errors and uncaught exceptions. */
+export async function openPage(browser: Browser, url: string, options: { colorScheme?: 'light' | 'dark' } = {}): Promise<{ page: Page; errors: string[] }> {
+  const context = await browser.newContext({ colorScheme: options.colorScheme ?? 'light', viewport: { width: 1200, height: 900 } });
+  const page = await context.newPage();
+  const errors: string[] = [];
+  page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
+  page.on('pageerror', (e) => errors.push(String(e)));
+  await page.goto(url, { waitUntil: 'networkidle' });
+  return { page, errors };
+}
+
+/** Waits until the Solid islands on the page have hydrated. */
+export async function hydrated(page: Page): Promise<void> {
+  await page.waitForFunction(() => [...document.querySelectorAll('astro-island')].every((el) => !el.hasAttribute('ssr')));
+}
