@@ -17,3 +17,13 @@ export {
 export { E_SERIES, preferredNeighbours } from './preferred';
 export type { ESeriesName, PreferredNeighbours } from './preferred';
 export { ellipticK, ellipticE, ellipticD } from './elliptic';
+export {
+  awgDiameter,
+  parseAwg,
+  METRIC_WIRE_DIAMETERS,
+  enamelledDiameter,
+  resistivityAtTemperature,
+  wireResistanceDc,
+  wireLengthForCoil,
+} from './wire';
+export type { AwgSize, EnamelGrade, CoilWireInput } from './wire';
