@@ -27,3 +27,10 @@ export {
   wireLengthForCoil,
 } from './wire';
 export type { AwgSize, EnamelGrade, CoilWireInput } from './wire';
+export {
+  skinDepth,
+  wireAcResistanceRatio,
+  wireInternalImpedance,
+  SKIN_ASYMPTOTIC_SWITCH,
+} from './skin';
+export type { WireInternalImpedance } from './skin';
