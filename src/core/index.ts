@@ -34,3 +34,19 @@ export {
   SKIN_ASYMPTOTIC_SWITCH,
 } from './skin';
 export type { WireInternalImpedance } from './skin';
+export { complex, cAdd, cSub, cMul, cDiv, cInv, cParallel, cAbs, cArg } from './complex';
+export type { Complex } from './complex';
+export {
+  analyzeTank,
+  resolveTank,
+  tankImpedance,
+  sweepTank,
+  tankStress,
+  combineQ,
+  combineLoadedQ,
+  insertionLoss,
+  seriesToParallelResistance,
+  parallelToSeriesResistance,
+  EXTRA_LOW_VOLTAGE_AC_RMS,
+} from './tank';
+export type { TankMode, TankInput, ResolvedTank, TankAnalysis, SweepOptions, TankSweep, TankStressInput, TankStress } from './tank';
