@@ -50,3 +50,14 @@ export {
   EXTRA_LOW_VOLTAGE_AC_RMS,
 } from './tank';
 export type { TankMode, TankInput, ResolvedTank, TankAnalysis, SweepOptions, TankSweep, TankStressInput, TankStress } from './tank';
+export {
+  nagaokaCoefficient,
+  rosaCorrections,
+  rosaKm,
+  rosaKs,
+  ROSA_KM_LIMIT,
+  wheelerSolenoidInductance,
+  solenoidInductance,
+  turnsForInductance,
+} from './solenoid';
+export type { SolenoidInput, SolenoidResult, TurnsForInductanceInput, TurnsForInductanceResult } from './solenoid';
