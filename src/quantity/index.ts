@@ -1,0 +1,78 @@
+/**
+ * Quantities a person types, read into SI and written back for people.
+ *
+ * `parseQuantity(text, unit)` reads a plain value for a field that needs
+ * `unit` and returns SI; `parseQuantityAsync` also works out calculations
+ * (loading mathjs on demand); `formatQuantity` / `formatNumber` write values.
+ * No dependencies here; mathjs is imported dynamically by ./expression.ts.
+ * The same rules are explained for users in content/docs/entering-values.md.
+ *
+ * Rules for reading (a field's kind is one of H F Hz Ω m V A W s):
+ * - Number: 4.7, .5, 5., 1e-6, 1E6; surrounding spaces ignored; space or none
+ *   between number and unit (also no-break and thin spaces).
+ * - Prefixes in their SI case: f p n µ m k M G T. `M` is always mega and `m`
+ *   always milli (unlike SPICE, where M is milli). Also accepted because they
+ *   cannot be misread: `u` and `U` for micro, `K` for kilo, `N` for nano, and
+ *   `meg`/`MEG`/`Meg` for mega (SPICE habit). Both micro signs, µ (U+00B5) and
+ *   μ (U+03BC), are accepted; Ω may be U+03A9 or U+2126.
+ * - A prefix alone takes the field's unit: 220p in a capacitance field is
+ *   220 pF, 7.1M in a frequency field is 7.1 MHz.
+ * - RKM style (IEC 60062) everywhere: the prefix letter is the decimal point,
+ *   4p7 = 4.7p, 2k2, 1M5, 4u7; R for ohms (4R7 = 4.7 Ω, 100R = 100 Ω) and V
+ *   for volts (4V7 = 4.7 V). A unit may follow (4u7H); a second prefix may not.
+ * - Units: H; F; Hz (also hz, HZ); Ω, ohm, ohms, R; m, metre(s), meter(s);
+ *   V; A; W; s. Lowercase h, f (after a prefix: 220pf), v, a, w are accepted.
+ *   Older radio spellings: mfd = µF; mmfd, µµF, uuF = pF.
+ * - Lengths: a bare number is metres; `m` right after the number means
+ *   metres and `mm` millimetres; also cm, in / inch / inches / " (25.4 mm),
+ *   mil / mils / thou (0.0254 mm).
+ * - A unit of another kind is refused, naming both kinds ("pF is a
+ *   capacitance; this field needs an inductance in henries (H).").
+ * - Refused as ambiguous, with a hint: mHz / mhz and a bare m in a frequency
+ *   field (millihertz never suits a tank; "did you mean MHz?"); mF, mf, MF, Mf
+ *   (older books mean microfarads, SI means milli/mega: write µF);
+ *   a bare f in a capacitance field (femto or farads?); 1m5 in a length field
+ *   (metres or millimetres?). Case slips get a hint (PF → pF, MM → mm).
+ * - Comma: refused, in every position. Use a point (4.7) or RKM style (4u7);
+ *   1,000 means one thousand in some countries and one in others.
+ * - Signs: a leading + or − (also U+2212) is read; negative values are
+ *   returned and the core decides whether they are allowed.
+ * - Refused as not finite: NaN, Infinity, ∞, overflow (1e999) and underflow
+ *   (1e-999, which would silently become zero).
+ * - Empty text, text longer than 200 characters, text without a number and
+ *   bare operators (+, *, ()) are refused.
+ * - A calculation (operators + − * / ^ × ÷, parentheses, pi/π/tau, functions)
+ *   is not worked out by parseQuantity: it throws QuantityExpressionError with
+ *   `needsExpression === true`; see `looksLikeExpression`. parseQuantityAsync
+ *   works it out: numbers with suffixes follow the rules above, a result with
+ *   a unit must have the field's dimension, a bare result is in the field's
+ *   unit. Allowed names: pi, e, tau, sqrt, cbrt, abs, exp, log (natural),
+ *   log10, sin, cos, tan, atan, min, max, hypot.
+ *
+ * Rules for writing: see formatQuantity (engineering notation with an SI
+ * prefix, `—` for non-finite values, exponent form beyond f…T).
+ */
+import { looksLikeExpression, parseQuantity } from './parse';
+import type { QuantityUnit } from './units';
+
+export { QuantityError, QuantityExpressionError, isQuantityError } from './errors';
+export type { QuantityErrorCode } from './errors';
+export type { QuantityUnit } from './units';
+export { QUANTITY_UNITS } from './units';
+export { parseQuantity, looksLikeExpression, MAX_QUANTITY_LENGTH } from './parse';
+export { formatQuantity, formatNumber, NO_VALUE } from './format';
+
+/**
+ * Reads a plain value or works out a calculation ("2*47p", "100p + 22p",
+ * "1/((2*pi*7.1MHz)^2 * 4.7uH)") for a field that needs `unit`; returns SI.
+ * Plain values go through parseQuantity and never load mathjs. Rejects with
+ * QuantityError like parseQuantity, and for calculations that cannot be
+ * worked out or give a result of another kind.
+ */
+export async function parseQuantityAsync(text: string, unit: QuantityUnit): Promise<number> {
+  if (typeof text === 'string' && looksLikeExpression(text)) {
+    const { evaluateQuantityExpression } = await import('./expression');
+    return evaluateQuantityExpression(text, unit);
+  }
+  return parseQuantity(text, unit);
+}
