@@ -61,3 +61,13 @@ export {
   turnsForInductance,
 } from './solenoid';
 export type { SolenoidInput, SolenoidResult, TurnsForInductanceInput, TurnsForInductanceResult } from './solenoid';
+export {
+  MEDHURST_TABLE,
+  medhurstFittedH,
+  medhurstH,
+  medhurstSelfCapacitance,
+  medhurstCapacitance,
+  selfResonantFrequency,
+  apparentCoil,
+} from './selfCapacitance';
+export type { MedhurstPoint, MedhurstH, SelfCapacitanceResult, ApparentCoilInput, ApparentCoil } from './selfCapacitance';
