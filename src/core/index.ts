@@ -71,3 +71,5 @@ export {
   apparentCoil,
 } from './selfCapacitance';
 export type { MedhurstPoint, MedhurstH, SelfCapacitanceResult, ApparentCoilInput, ApparentCoil } from './selfCapacitance';
+export { toroidInductance, toroidTurnsForInductance, inductanceFromAl, turnsFromAl, toroidCoreQ } from './toroid';
+export type { ToroidInput, ToroidResult, ToroidTurnsInput, ToroidTurnsResult } from './toroid';
