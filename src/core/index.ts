@@ -73,3 +73,5 @@ export {
 export type { MedhurstPoint, MedhurstH, SelfCapacitanceResult, ApparentCoilInput, ApparentCoil } from './selfCapacitance';
 export { toroidInductance, toroidTurnsForInductance, inductanceFromAl, turnsFromAl, toroidCoreQ } from './toroid';
 export type { ToroidInput, ToroidResult, ToroidTurnsInput, ToroidTurnsResult } from './toroid';
+export { tankNetlist } from './netlist';
+export type { TankNetlistOptions } from './netlist';

@@ -27,7 +27,8 @@
  * - series and parallel equivalents of a loss at one frequency,
  *   R_p = R_s (1 + Q²) with Q = X / R_s (circuit algebra, exact);
  * - apparent resistance and inductance of a coil with self-capacitance,
- *   R/(1 − ω²LC_s)² and L/(1 − ω²LC_s) (Terman 1943);
+ *   R/(1 − ω²LC_s)² and L/(1 − ω²LC_s) (Terman 1943), used with the stored
+ *   energy to weigh each loss when C_s is given;
  * - insertion loss of a single resonator between equal terminations,
  *   IL = −20 log10(1 − Q_L/Q_u) dB (common practice; derived at
  *   `insertionLoss`).
@@ -105,7 +106,7 @@ export interface TankAnalysis {
   coilQ: number;
   /** Capacitor Q = 1/(ω0 C ESR) at f0 (Infinity for an ideal capacitor). */
   capacitorQ: number;
-  /** 1/Q_u = Σ 1/Q_i over coil and capacitor (energy-weighted when C_s is given). */
+  /** 1/Q_u = Σ 1/Q_i over coil and capacitor (capacitor weighted by C/(C + C_s) when C_s is given). */
   unloadedQ: number;
   /** Q set by the source and load resistances alone (Infinity when neither is given). */
   externalQ: number;
@@ -567,12 +568,14 @@ function qFigures(t: ResolvedTank): QFigures {
     invSource = t.sourceResistance ? x0 / t.sourceResistance : 0;
     invLoad = t.loadResistance ? x0 / t.loadResistance : 0;
   } else {
-    // Coil with C_s seen from its terminals: R/(1 − ω²LC_s)², L/(1 − ω²LC_s) (Terman 1943); 1 − ω0²LC_s = k.
-    const x = 1 / (w0 * C);
-    invCoil = t.coilResistance / (k * k * x);
-    invCap = 1 / capacitorQ;
-    invSource = t.sourceResistance ? t.sourceResistance / x : 0;
-    invLoad = t.loadResistance ? t.loadResistance / x : 0;
+    // Coil with C_s seen from its terminals: R/(1 − ω²LC_s)², L/(1 − ω²LC_s) (Terman 1943), with
+    // 1 − ω0²LC_s = k. The loop current I flows in C and the terminations; the coil carries I/k, so
+    // the stored energy is L I²/(2k²) and Q = ω0 W / P weighs every loss but the coil's by k.
+    const x = 1 / (w0 * C); // = ω0 L / k, the reactance of either side at resonance
+    invCoil = 1 / coilQ;
+    invCap = k / capacitorQ;
+    invSource = t.sourceResistance ? (k * t.sourceResistance) / x : 0;
+    invLoad = t.loadResistance ? (k * t.loadResistance) / x : 0;
   }
   const invU = invCoil + invCap;
   const invE = invSource + invLoad;
@@ -636,8 +639,10 @@ function resonance(k: Kernel, u0: number, loaded: boolean, q: number, field: str
  *   the |Z| peak is at f0 √(√(1 + 2/Q²) − 1/Q²), much closer to f0; both
  *   differ from 1/(2π√(LC)) only as 1/Q² or 1/Q⁴.
  * - Q values: 1/Q_u = 1/Q_coil + 1/Q_cap, 1/Q_L = 1/Q_u + 1/Q_e (Pozar),
- *   evaluated at f0; with C_s given, the capacitor's (parallel mode) or
- *   coil's (series mode) share is weighted by its stored-energy share.
+ *   evaluated at f0 as Q = ω0 W / P (stored energy over loss). With C_s
+ *   given, the capacitor's and the terminations' terms are weighted by
+ *   k = C/(C + C_s) in both modes (the coil's term is its own 1/Q_coil);
+ *   without C_s every weight is 1.
  * - `bandwidth`: exact −3 dB width of the terminated response (≈ f/Q_L).
  * - `dynamicResistance`: parallel, the tank's peak |Z| (≈ Q_u ω L, Terman 1943);
  *   series, its |Z| at resonance (the minimum, ≈ X/Q_u).
