@@ -75,3 +75,12 @@ export { toroidInductance, toroidTurnsForInductance, inductanceFromAl, turnsFrom
 export type { ToroidInput, ToroidResult, ToroidTurnsInput, ToroidTurnsResult } from './toroid';
 export { tankNetlist } from './netlist';
 export type { TankNetlistOptions } from './netlist';
+export {
+  transverseFieldLoss,
+  solenoidProximityFactor,
+  coilAcResistance,
+  coilQ,
+  PROXIMITY_CLOSE_SPACING,
+  PROXIMITY_SHORT_COIL,
+} from './coilLoss';
+export type { ProximityInput, ProximityResult, CoilResistanceInput, CoilResistance, CoilQInput, CoilQ } from './coilLoss';
