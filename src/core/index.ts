@@ -84,3 +84,5 @@ export {
   PROXIMITY_SHORT_COIL,
 } from './coilLoss';
 export type { ProximityInput, ProximityResult, CoilResistanceInput, CoilResistance, CoilQInput, CoilQ } from './coilLoss';
+export { multilayerInductance, multilayerTurnsForInductance } from './multilayer';
+export type { MultilayerGeometry, MultilayerInput, MultilayerResult, MultilayerTurnsInput, MultilayerTurnsResult } from './multilayer';
