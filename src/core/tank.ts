@@ -505,7 +505,7 @@ export function insertionLoss(unloadedQ: number, loadedQ: number): number {
   if (!(loadedQ < unloadedQ)) {
     throw new DesignError('loadedQ', `Loaded Q ${fmtNum(loadedQ)} must be below the unloaded Q ${fmtNum(unloadedQ)}: loading a tank can only lower its Q.`);
   }
-  return -20 * Math.log10(1 - loadedQ / unloadedQ);
+  return -20 * Math.log10(1 - loadedQ / unloadedQ) + 0; // + 0 turns −0 into 0
 }
 
 /**
