@@ -55,8 +55,11 @@ export const PROXIMITY_SHORT_COIL = 1;
  */
 export function transverseFieldLoss(s: number): number {
   if (s === 0) return 0;
-  const [zr, zi] = internalImpedanceRatio(s);
-  // With u = 1/(2ζ): Re{j u conj(1 − u)} = Re{j (u − |u|²)} = −Im(u) = Im(ζ)/(2|ζ|²).
+  return transverseFromZeta(s, internalImpedanceRatio(s));
+}
+
+/** s² Γ from ζ: with u = 1/(2ζ), Re{j u conj(1 − u)} = Re{j (u − |u|²)} = −Im(u) = Im(ζ)/(2|ζ|²). */
+function transverseFromZeta(s: number, [zr, zi]: readonly [number, number]): number {
   return (s * s * zi) / (2 * (zr * zr + zi * zi));
 }
 
@@ -94,9 +97,10 @@ export function solenoidProximityFactor({ frequency, wireDiameter, pitch, resist
   checkPitch(pitch, wireDiameter);
   if (frequency === 0) return { skinRatio: 1, proximityFactor: 1, radiusOverSkinDepth: 0 };
   const s = wireDiameter / 2 / skinDepth(frequency, resistivity);
-  const skinRatio = internalImpedanceRatio(s)[0];
+  const zeta = internalImpedanceRatio(s);
+  const skinRatio = zeta[0];
   const ratio = wireDiameter / pitch;
-  const extra = ((Math.PI * Math.PI) / 2) * ratio * ratio * transverseFieldLoss(s);
+  const extra = ((Math.PI * Math.PI) / 2) * ratio * ratio * transverseFromZeta(s, zeta);
   return { skinRatio, proximityFactor: 1 + extra / skinRatio, radiusOverSkinDepth: s };
 }
 
