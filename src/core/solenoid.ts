@@ -421,7 +421,8 @@ export function turnsForInductance(input: TurnsForInductanceInput): TurnsForIndu
 
   const lOf = (n: number) => solenoidCore(diameter, n, pitch, wireDiameter).inductance;
   const l1 = lOf(1);
-  if (target < l1) {
+  // (a target within rounding of one turn's inductance is one turn)
+  if (target < l1 * (1 - 1e-12)) {
     throw new DesignError(
       'inductance',
       `${formatHenries(target)} is less than a single turn of this diameter and wire gives (${formatHenries(l1)}): use a smaller diameter or another kind of inductor.`,
@@ -429,7 +430,7 @@ export function turnsForInductance(input: TurnsForInductanceInput): TurnsForIndu
   }
   // Bracket by doubling.
   let lo = 1;
-  let flo = l1 - target;
+  let flo = Math.min(0, l1 - target);
   let hi = 2;
   let fhi = lOf(hi) - target;
   while (fhi < 0) {
