@@ -161,7 +161,7 @@ export default function ResonanceBench(props: { formulas: ResonanceFormulas }) {
           <Formula html={props.formulas.reactance} source="definition of reactance" />
         </ResultRow>
         <ResultRow id="out-z0" label="Characteristic impedance" symbol="Z₀" value={r()?.impedance} unit="Ω" stale={stale()}>
-          <Formula html={props.formulas.impedance} source="equals X at resonance; with Q it sets the dynamic resistance R_D = Q·Z₀ (Terman 1943)" />
+          <Formula html={props.formulas.impedance} source="equals X at resonance; a tank's dynamic resistance is Q·Z₀ (Terman 1943)" />
         </ResultRow>
         <section class="tw-table-block" aria-labelledby="e12-title">
           <h3 id="e12-title">Nearest E12 capacitors (IEC 60063)</h3>

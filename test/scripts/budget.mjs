@@ -62,7 +62,20 @@ function closure(entries) {
     }
   }
   for (const f of seen) lazy.delete(f);
-  return { initial: seen, lazy };
+  // What the on-demand chunks pull in statically is on demand too.
+  const lazyAll = new Set();
+  const more = [...lazy];
+  while (more.length) {
+    const file = more.pop();
+    if (lazyAll.has(file) || seen.has(file)) continue;
+    lazyAll.add(file);
+    const code = readFileSync(file, 'utf8');
+    for (const m of [...code.matchAll(STATIC_IMPORT), ...code.matchAll(DYNAMIC_IMPORT)]) {
+      const dep = urlToFile(m[1], file);
+      if (dep) more.push(dep);
+    }
+  }
+  return { initial: seen, lazy: lazyAll };
 }
 
 const pages = walk(dist).filter((f) => f.endsWith('.html')).sort();
