@@ -116,7 +116,10 @@ export interface TankAnalysis {
   bandwidth: number;
   /** −3 dB width of the tank's own impedance response, Hz; exact (0 for ideal parts). */
   unloadedBandwidth: number;
-  /** Parallel: the tank's own peak |Z| (Terman's R_D ≈ Q ω L). Series: its |Z| minimum (≈ X/Q). Ω. */
+  /**
+   * Parallel: the tank's own peak |Z| (Terman's R_D ≈ Q ω L; Infinity when coil and capacitor are ideal).
+   * Series: its |Z| minimum (≈ X/Q; 0 when ideal). Ω.
+   */
   dynamicResistance: number;
   /** |Z| at the loaded resonance including source and load resistances, Ω. */
   loadedImpedance: number;
