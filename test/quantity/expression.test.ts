@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { parseQuantityAsync, QuantityError, type QuantityUnit, type QuantityErrorCode } from '../../src/quantity';
 import { loadRestrictedMath, tokenizeExpression, expressionEngineLoaded } from '../../src/quantity/expression';
 
@@ -17,6 +17,12 @@ async function rejection(text: string, unit: QuantityUnit): Promise<QuantityErro
 }
 
 const TWO_PI = 2 * Math.PI;
+
+// The first import of mathjs (transformed by Vite in tests) can take seconds on a
+// busy 2-core machine: load it once here, outside the per-test time limit.
+beforeAll(async () => {
+  await loadRestrictedMath();
+}, 120_000);
 
 describe('parseQuantityAsync: calculations', () => {
   const cases: ReadonlyArray<readonly [string, QuantityUnit, number]> = [
