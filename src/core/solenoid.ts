@@ -263,7 +263,8 @@ export function wheelerSolenoidInductance(radius: number, length: number, turns:
  * matter), when the pitch exceeds half the coil radius (Rosa's corrections
  * assume p ≪ r: against an exact sum of Maxwell's mutual inductances of
  * circular filaments they are within 0.6 % up to p = r/2, about 2 % at p = r
- * and 4–7 % at p = 2r), and when the wire is thick beside the coil (d > r/5:
+ * and 4–7 % at p = 2r; beyond about 2r the corrected value even rises with
+ * pitch), and when the wire is thick beside the coil (d > r/5:
  * at radio frequencies the current crowds to the inside of the turns).
  * A large pitch-to-wire ratio by itself gets no note: ks then turns negative
  * (the wire's own inductance exceeds its sheet strip's) but the comparison
@@ -300,7 +301,9 @@ export function solenoidInductance(input: SolenoidInput): SolenoidResult {
     notes.push(
       note(
         'validity',
-        `The pitch (${mm(pitch)}) is more than half the coil radius (${mm(c.r)}): Rosa's corrections assume turns close together compared with the radius; expect the result to be high by about 1 % at a pitch of half the radius, 2 % at the full radius and more beyond.`,
+        pitch > 2 * c.r
+          ? `The pitch (${mm(pitch)}) is more than twice the coil radius (${mm(c.r)}): the turns act as separate loops and Rosa's corrections no longer hold (the result is several per cent high and even rises with pitch). Treat it as an estimate only.`
+          : `The pitch (${mm(pitch)}) is more than half the coil radius (${mm(c.r)}): Rosa's corrections assume turns close together compared with the radius; expect the result to be high by up to about 1 % at a pitch of half the radius, 2 % at the full radius and more beyond.`,
         'pitch',
       ),
     );

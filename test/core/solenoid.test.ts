@@ -207,6 +207,8 @@ describe('solenoidInductance', () => {
     expect(loop.notes.some((n) => n.field === 'turns')).toBe(true);
     const wide = solenoidInductance({ diameter: 0.02, turns: 4, pitch: 6e-3, wireDiameter: 1e-3 });
     expect(wide.notes.some((n) => n.field === 'pitch' && n.level === 'validity')).toBe(true);
+    const loops = solenoidInductance({ diameter: 0.02, turns: 3, pitch: 25e-3, wireDiameter: 1e-3 });
+    expect(loops.notes.some((n) => n.field === 'pitch' && /separate loops/.test(n.message))).toBe(true);
     const thick = solenoidInductance({ diameter: 0.01, turns: 10, pitch: 2e-3, wireDiameter: 1.6e-3 });
     expect(thick.notes.some((n) => n.field === 'wireDiameter')).toBe(true);
   });
