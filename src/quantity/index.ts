@@ -20,7 +20,8 @@
  * - RKM style (IEC 60062) everywhere: the prefix letter is the decimal point,
  *   4p7 = 4.7p, 2k2, 1M5, 4u7; R for ohms (4R7 = 4.7 Ω, 100R = 100 Ω) and V
  *   for volts (4V7 = 4.7 V). A unit may follow (4u7H); a second prefix may not.
- * - Units: H; F; Hz (also hz, HZ); Ω, ohm, ohms, R; m, metre(s), meter(s);
+ * - Units: H; F; Hz (also hz, HZ, and c / cps as in kc, Mc of older books);
+ *   Ω, ohm, ohms, R; m, metre(s), meter(s);
  *   V; A; W; s. Lowercase h, f (after a prefix: 220pf), v, a, w are accepted.
  *   Older radio spellings: mfd = µF; mmfd, µµF, uuF = pF.
  * - Lengths: a bare number is metres; `m` right after the number means
@@ -28,7 +29,7 @@
  *   mil / mils / thou (0.0254 mm).
  * - A unit of another kind is refused, naming both kinds ("pF is a
  *   capacitance; this field needs an inductance in henries (H).").
- * - Refused as ambiguous, with a hint: mHz / mhz and a bare m in a frequency
+ * - Refused as ambiguous, with a hint: mHz / mhz / mc and a bare m in a frequency
  *   field (millihertz never suits a tank; "did you mean MHz?"); mF, mf, MF, Mf
  *   (older books mean microfarads, SI means milli/mega: write µF);
  *   a bare f in a capacitance field (femto or farads?); 1m5 in a length field
@@ -46,7 +47,8 @@
  *   `needsExpression === true`; see `looksLikeExpression`. parseQuantityAsync
  *   works it out: numbers with suffixes follow the rules above, a result with
  *   a unit must have the field's dimension, a bare result is in the field's
- *   unit. Allowed names: pi, e, tau, sqrt, cbrt, abs, exp, log (natural),
+ *   unit; a sum of a number with a unit and one without is refused
+ *   (100p + 22pF; R is the ohm, so 2k2 + 4R7 too). Allowed names: pi, e, tau, sqrt, cbrt, abs, exp, log (natural),
  *   log10, sin, cos, tan, atan, min, max, hypot.
  *
  * Rules for writing: see formatQuantity (engineering notation with an SI

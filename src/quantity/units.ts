@@ -69,7 +69,8 @@ const PREFIX_SYMBOL: Readonly<Record<number, string>> = {
 const UNIT_WORDS: ReadonlyMap<string, QuantityUnit> = new Map<string, QuantityUnit>([
   ...(['H', 'h', 'henry', 'henries', 'henrys'] as const).map((w) => [w, 'H'] as const),
   ...(['F', 'farad', 'farads'] as const).map((w) => [w, 'F'] as const),
-  ...(['Hz', 'hz', 'HZ'] as const).map((w) => [w, 'Hz'] as const),
+  // c = cycles per second, as in older books: kc, Mc
+  ...(['Hz', 'hz', 'HZ', 'c', 'cps'] as const).map((w) => [w, 'Hz'] as const),
   ...(['Ω', 'ohm', 'ohms', 'Ohm', 'Ohms', 'OHM', 'OHMS'] as const).map((w) => [w, 'Ω'] as const),
   ...(['m', 'metre', 'metres', 'meter', 'meters'] as const).map((w) => [w, 'm'] as const),
   ...(['V', 'v', 'volt', 'volts'] as const).map((w) => [w, 'V'] as const),
@@ -78,7 +79,7 @@ const UNIT_WORDS: ReadonlyMap<string, QuantityUnit> = new Map<string, QuantityUn
   ...(['s', 'sec', 'secs', 'second', 'seconds'] as const).map((w) => [w, 's'] as const),
 ]);
 
-const HZ_WORDS = new Set(['Hz', 'hz', 'HZ']);
+const HZ_WORDS = new Set(['Hz', 'hz', 'HZ', 'c', 'cps']);
 
 /** Whole suffixes with a fixed meaning that take no prefix. */
 type Fixed = { unit: QuantityUnit; exp: number; factor: number };

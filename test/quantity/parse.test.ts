@@ -72,6 +72,8 @@ const ACCEPTED: ReadonlyArray<readonly [string, QuantityUnit, number]> = [
   ['14 MEG', 'Hz', 14e6],
   ['2M5', 'Hz', 2.5e6],
   ['60 Hz', 'Hz', 60],
+  ['455 kc', 'Hz', 455e3], // older books: kilocycles (per second)
+  ['7.1 Mc', 'Hz', 7.1e6],
   ['1e6', 'Hz', 1e6],
   // resistance
   ['2k2', '\u03a9', 2200],
@@ -166,6 +168,7 @@ const REJECTED: ReadonlyArray<readonly [string, QuantityUnit, QuantityErrorCode,
   ['7.1mhz', 'Hz', 'ambiguous', /did you mean 7\.1 MHz/],
   ['7.1 mHz', 'Hz', 'ambiguous', /millihertz.*did you mean 7\.1 MHz/],
   ['7.1m', 'Hz', 'ambiguous', /did you mean 7\.1M/],
+  ['7.1 mc', 'Hz', 'ambiguous', /did you mean 7\.1 MHz/],
   ['0.1 mF', 'F', 'ambiguous', /microfarads/],
   ['0.1 mf', 'F', 'ambiguous', /microfarads/],
   ['0.1 MF', 'F', 'ambiguous', /microfarads/],
