@@ -8,19 +8,20 @@ const ci = process.env.CI === 'true' || process.env.CI === '1';
 export default defineConfig({
   test: {
     reporters: ci ? ['default', ['json', { outputFile: 'test-results/vitest.json' }]] : ['default'],
-    benchmark: { include: ['test/bench/**/*.bench.ts'] },
     projects: [
       {
         test: {
           name: 'unit',
           include: ['test/{core,quantity,sheet,properties,spice}/**/*.test.ts'],
           environment: 'node',
+          benchmark: { include: ['test/bench/**/*.bench.ts'] },
         },
       },
       {
         test: {
           name: 'e2e',
           include: ['test/e2e/**/*.test.ts'],
+          benchmark: { include: [] },
           environment: 'node',
           testTimeout: 60_000,
           hookTimeout: 120_000,
