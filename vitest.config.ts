@@ -12,7 +12,7 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
-          include: ['test/{core,quantity,sheet,properties,spice}/**/*.test.ts'],
+          include: ['test/{core,quantity,kit,sheet,properties,spice}/**/*.test.ts'],
           environment: 'node',
           benchmark: { include: ['test/bench/**/*.bench.ts'] },
         },
