@@ -5,13 +5,16 @@
 import { Show, type JSX } from 'solid-js';
 import type { QuantityState } from './quantityState';
 
+/** What a field needs from its state: a QuantityState, or a plain-number state (numberState.ts). */
+export type FieldState = Pick<QuantityState, 'text' | 'error' | 'pending' | 'setText'> & { readonly unit?: string };
+
 export interface QuantityFieldProps {
   /** Stable id, unique on the page (also the URL key of the field). */
   id: string;
   label: string;
   /** Symbol shown after the label, e.g. "L". */
   symbol?: string;
-  q: QuantityState;
+  q: FieldState;
   /** Examples of accepted input, shown under the field. */
   hint?: string;
   /** A message from the core about this input (DesignError), shown like a parse error. */
@@ -52,7 +55,7 @@ export function QuantityField(props: QuantityFieldProps) {
       <Show when={props.q.pending()}>
         <p class="tw-field-pending">Evaluating…</p>
       </Show>
-      <p class="tw-field-hint" id={hintId()}>{props.hint ?? `Unit: ${props.q.unit}`}</p>
+      <p class="tw-field-hint" id={hintId()}>{props.hint ?? (props.q.unit ? `Unit: ${props.q.unit}` : '')}</p>
       {props.children}
     </div>
   );

@@ -4,15 +4,16 @@
  *
  * Reading is defensive: a link can come from anywhere. Unknown keys, values
  * that are too long, carry characters no quantity has, name functions other
- * than sqrt/pi, or do not parse, are ignored and listed as notices the bench
+ * than the calculator's own (sqrt, pi, …), or do not parse, are ignored and listed as notices the bench
  * shows as plain text (never as markup). Nothing read from the URL can crash
  * the page or reach innerHTML.
  */
-import { looksLikeExpression, parseQuantity, type QuantityUnit } from '../../src/quantity';
+import { EXPRESSION_CONSTANTS, EXPRESSION_FUNCTIONS, looksLikeExpression, parseQuantity, type QuantityUnit } from '../../src/quantity';
 
 export type UrlFieldSpec =
   | { kind: 'quantity'; unit: QuantityUnit; label: string }
-  | { kind: 'choice'; options: readonly string[]; label: string };
+  | { kind: 'choice'; options: readonly string[]; label: string }
+  | { kind: 'number'; label: string };
 
 export type UrlSchema = Record<string, UrlFieldSpec>;
 
@@ -26,9 +27,9 @@ export const MAX_URL_VALUE = 120;
 /** At most this many parameters are looked at. */
 const MAX_PARAMS = 40;
 
-const ALLOWED_CHARS = /^[0-9A-Za-z .+\-*/^()µμΩΩ"]*$/u;
-const NUMBER_TOKEN = /\d[\d.]*(?:[eE][+-]?\d+)?[A-Za-zµμΩΩ"]*\d*/gu;
-const ALLOWED_WORDS = new Set(['pi', 'sqrt']);
+const ALLOWED_CHARS = /^[0-9A-Za-z .,+\-−*×/÷^()µμΩΩ"″π]*$/u;
+const NUMBER_TOKEN = /\d[\d.]*(?:[eE][+-]?\d+)?[A-Za-zµμΩΩ"″]*\d*/gu;
+const ALLOWED_WORDS = new Set([...EXPRESSION_CONSTANTS, ...EXPRESSION_FUNCTIONS, 'π']);
 
 function shown(text: string): string {
   const clean = text.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
@@ -40,7 +41,7 @@ export function refuseQuantityText(text: string, unit: QuantityUnit): string | n
   if (text.length > MAX_URL_VALUE) return `longer than ${MAX_URL_VALUE} characters`;
   if (!ALLOWED_CHARS.test(text)) return 'contains characters no quantity uses';
   if (looksLikeExpression(text)) {
-    const words = text.replace(NUMBER_TOKEN, ' ').match(/[A-Za-zµμΩΩ]+/gu) ?? [];
+    const words = text.replace(NUMBER_TOKEN, ' ').match(/[A-Za-zµμΩΩπ]+/gu) ?? [];
     const bad = words.find((w) => !ALLOWED_WORDS.has(w));
     return bad ? `uses "${shown(bad)}", which is not allowed in a link` : null;
   }
@@ -50,6 +51,12 @@ export function refuseQuantityText(text: string, unit: QuantityUnit): string | n
   } catch (e) {
     return e instanceof Error ? e.message : 'is not a value';
   }
+}
+
+/** Why a link value for a plain-number field (a Q, a ratio) is refused, or null when it is acceptable. */
+export function refusePlainNumberText(text: string): string | null {
+  if (text.length > MAX_URL_VALUE) return `longer than ${MAX_URL_VALUE} characters`;
+  return /^[+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/.test(text) ? null : 'not a plain number';
 }
 
 /** Reads the values a schema knows from a query string. */
@@ -78,6 +85,12 @@ export function decodeState(search: string, schema: UrlSchema): DecodedState {
     if (spec.kind === 'choice') {
       if (spec.options.includes(text)) values[key] = text;
       else notices.push(`Ignored the link’s “${spec.label}” setting “${shown(text)}”: expected one of ${spec.options.join(', ')}.`);
+      continue;
+    }
+    if (spec.kind === 'number') {
+      const bad = refusePlainNumberText(text);
+      if (bad === null) values[key] = text;
+      else notices.push(`Ignored the link’s value for ${spec.label} (“${shown(text)}”): ${bad}`);
       continue;
     }
     const why = refuseQuantityText(text, spec.unit);

@@ -8,7 +8,8 @@ import { extname, join, normalize, resolve } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { chromiumPath, requireTool } from '../helpers/tools';
 
-export const DIST = resolve(import.meta.dirname, '../../dist');
+/** The built site; TANKWRIGHT_DIST points elsewhere (a private build while others build dist/). */
+export const DIST = process.env.TANKWRIGHT_DIST ? resolve(process.env.TANKWRIGHT_DIST) : resolve(import.meta.dirname, '../../dist');
 
 const TYPES: Record<string, string> = {
   '.html': 'text/html; charset=utf-8', '.js': 'text/javascript; charset=utf-8', '.mjs': 'text/javascript; charset=utf-8',

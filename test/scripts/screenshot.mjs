@@ -2,6 +2,7 @@
 /**
  * Screenshots of built pages, to look at: serves dist/ and saves PNGs.
  * Usage: node test/scripts/screenshot.mjs /resonance/ [/coil/ …] [--dark] [--out .tmp/shots] [--width 1280]
+ * (TANKWRIGHT_DIST=dir serves another build than dist/.)
  */
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
@@ -16,7 +17,7 @@ const dark = args.includes('--dark') && args.splice(args.indexOf('--dark'), 1);
 const out = opt('--out', '.tmp/shots');
 const width = Number(opt('--width', '1280'));
 const routes = args.length ? args : ['/'];
-const dist = resolve(import.meta.dirname, '../../dist');
+const dist = process.env.TANKWRIGHT_DIST ? resolve(process.env.TANKWRIGHT_DIST) : resolve(import.meta.dirname, '../../dist');
 const types = { '.html': 'text/html', '.js': 'text/javascript', '.css': 'text/css', '.svg': 'image/svg+xml', '.woff2': 'font/woff2', '.woff': 'font/woff', '.ttf': 'font/ttf' };
 const server = createServer((req, res) => {
   let p = join(dist, decodeURIComponent(req.url.split('?')[0]));
