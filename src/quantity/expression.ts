@@ -25,12 +25,8 @@ import { QuantityError } from './errors';
 import { MAX_QUANTITY_LENGTH, commaError, prepareQuantityText, readPlainQuantity, type QuantityReading } from './parse';
 import { QUANTITY_UNITS, UNIT_KINDS, describeField, type QuantityUnit } from './units';
 
-/** Constants a calculation may use. */
-export const EXPRESSION_CONSTANTS: readonly string[] = ['pi', 'e', 'tau'];
-/** Functions a calculation may call (mathjs meanings: log is natural). */
-export const EXPRESSION_FUNCTIONS: readonly string[] = [
-  'sqrt', 'cbrt', 'abs', 'exp', 'log', 'log10', 'sin', 'cos', 'tan', 'atan', 'min', 'max', 'hypot',
-];
+import { EXPRESSION_CONSTANTS, EXPRESSION_FUNCTIONS } from './names';
+export { EXPRESSION_CONSTANTS, EXPRESSION_FUNCTIONS };
 const OPERATOR_FUNCTIONS = new Set(['add', 'subtract', 'multiply', 'divide', 'pow', 'unaryMinus', 'unaryPlus']);
 /** Prefix of the scope variables that carry numbers (users cannot type `_`). */
 const VAR = '_q';

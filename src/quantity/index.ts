@@ -63,6 +63,7 @@ export type { QuantityUnit } from './units';
 export { QUANTITY_UNITS } from './units';
 export { parseQuantity, looksLikeExpression, MAX_QUANTITY_LENGTH } from './parse';
 export { formatQuantity, formatNumber, NO_VALUE } from './format';
+export { EXPRESSION_CONSTANTS, EXPRESSION_FUNCTIONS } from './names';
 
 /**
  * Reads a plain value or works out a calculation ("2*47p", "100p + 22p",

@@ -55,3 +55,9 @@ describe('decodeState', () => {
     expect(refuseQuantityText('alert(1)', 'F')).toMatch(/alert/);
   });
 });
+
+describe('links keep every calculation a field accepts', () => {
+  it.each(['max(47p, 100p)', '2×47p', '1/(2*π*1k)', '100p − 22p', 'hypot(3,4)'])('%s survives the link', (text) => {
+    expect(refuseQuantityText(text, 'F')).toBeNull();
+  });
+});
