@@ -59,12 +59,6 @@ export function refusePlainNumberText(text: string): string | null {
   return /^[+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/.test(text) ? null : 'not a plain number';
 }
 
-/** Why a link value for a plain-number field (a Q, a ratio) is refused, or null when it is acceptable. */
-export function refusePlainNumberText(text: string): string | null {
-  if (text.length > MAX_URL_VALUE) return `longer than ${MAX_URL_VALUE} characters`;
-  return /^[+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/.test(text) ? null : 'not a plain number';
-}
-
 /** Reads the values a schema knows from a query string. */
 export function decodeState(search: string, schema: UrlSchema): DecodedState {
   const values: Record<string, string> = {};
@@ -91,12 +85,6 @@ export function decodeState(search: string, schema: UrlSchema): DecodedState {
     if (spec.kind === 'choice') {
       if (spec.options.includes(text)) values[key] = text;
       else notices.push(`Ignored the link’s “${spec.label}” setting “${shown(text)}”: expected one of ${spec.options.join(', ')}.`);
-      continue;
-    }
-    if (spec.kind === 'number') {
-      const bad = refusePlainNumberText(text);
-      if (bad === null) values[key] = text;
-      else notices.push(`Ignored the link’s value for ${spec.label} (“${shown(text)}”): ${bad}`);
       continue;
     }
     if (spec.kind === 'number') {
