@@ -1,12 +1,16 @@
 /**
  * A line plot of one or more curves against a shared x axis (frequency, as a
- * rule), drawn by uPlot. uPlot and its stylesheet load on demand, so a bench
- * paints its numbers first. Colours come from the page's CSS variables, so
+ * rule), drawn by uPlot. uPlot's JavaScript loads on demand, so a bench
+ * paints its numbers first (its small stylesheet comes with the page's CSS). Colours come from the page's CSS variables, so
  * the plot follows light and dark. The canvas has a text caption; the data
  * itself is offered for download by the bench (CSV).
  */
 import { createEffect, createSignal, onCleanup, onMount, Show } from 'solid-js';
 import type uPlotType from 'uplot';
+// The stylesheet is imported statically: Astro folds it into the page's CSS
+// either way, and a dynamic import() of it asks for a CSS file the build
+// never writes (a 404 that made the plot fail). Only the JavaScript is on demand.
+import 'uplot/dist/uPlot.min.css';
 
 export interface PlotSeries {
   label: string;
@@ -58,7 +62,7 @@ export function Plot(props: PlotProps) {
 
   onMount(async () => {
     try {
-      const [mod] = await Promise.all([import('uplot'), import('uplot/dist/uPlot.min.css')]);
+      const mod = await import('uplot');
       setLib(() => mod.default);
     } catch (e) {
       setFailed('The plot could not be loaded; the numbers above are unaffected.');

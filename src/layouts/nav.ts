@@ -7,6 +7,7 @@ export interface NavItem {
 export const NAV: readonly NavItem[] = [
   { href: '/', label: 'Home' },
   { href: '/resonance/', label: 'Resonance' },
+  { href: '/coil/', label: 'Coil' },
   { href: '/methods/', label: 'Methods' },
   { href: '/cautions/', label: 'Cautions' },
 ];
