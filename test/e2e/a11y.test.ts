@@ -1,0 +1,61 @@
+/**
+ * Accessibility: every built page, light and dark, checked by axe-core (the
+ * Deque rules engine, WCAG 2.x A/AA tags). Zero serious or critical
+ * violations allowed.
+ */
+import { readdirSync, statSync } from 'node:fs';
+import { join, relative } from 'node:path';
+import { createRequire } from 'node:module';
+import { readFileSync } from 'node:fs';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { browserAvailable, DIST, hydrated, launch, openPage, serveSite, type Site } from './harness';
+
+const require = createRequire(import.meta.url);
+const axeSource = readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8');
+
+function routes(dir = DIST, out: string[] = []): string[] {
+  for (const name of readdirSync(dir)) {
+    const p = join(dir, name);
+    if (statSync(p).isDirectory()) routes(p, out);
+    else if (name === 'index.html') out.push('/' + relative(DIST, dir).split('\\').join('/') + (dir === DIST ? '' : '/'));
+  }
+  return out.map((r) => r.replace(/^\/\/$/, '/')).sort();
+}
+
+interface AxeViolation { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }
+
+describe.runIf(browserAvailable())('axe-core on every page', () => {
+  let site: Site;
+  let browser: Browser;
+  beforeAll(async () => {
+    site = await serveSite();
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await site?.close();
+  });
+
+  const pages = browserAvailable() ? routes() : [];
+  it('finds the built pages', () => {
+    expect(pages).toContain('/');
+    expect(pages).toContain('/resonance/');
+  });
+
+  for (const scheme of ['light', 'dark'] as const) {
+    it.each(pages)(`%s has no serious or critical violations (${scheme})`, async (route) => {
+      const { page } = await openPage(browser, site.origin + route, { colorScheme: scheme });
+      await hydrated(page);
+      await page.addScriptTag({ content: axeSource });
+      const violations = await page.evaluate(async () => {
+        const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: AxeViolation[] }> } }).axe;
+        const result = await axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'best-practice'] } });
+        return result.violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.slice(0, 3).map((n) => ({ target: n.target })) }));
+      });
+      const bad = violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+      expect(bad, JSON.stringify(bad, null, 1)).toEqual([]);
+      await page.context().close();
+    });
+  }
+});
