@@ -8,6 +8,7 @@ export const NAV: readonly NavItem[] = [
   { href: '/', label: 'Home' },
   { href: '/resonance/', label: 'Resonance' },
   { href: '/coil/', label: 'Coil' },
+  { href: '/tank/', label: 'Tank' },
   { href: '/methods/', label: 'Methods' },
   { href: '/cautions/', label: 'Cautions' },
 ];
