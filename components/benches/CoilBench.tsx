@@ -412,11 +412,18 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
   /** Figures that show a half turn and no more: 10.5, 124, 7.0. */
   const turnFigures = (n: number | undefined) => (n === undefined || !(n > 0) ? 3 : Math.max(2, Math.floor(Math.log10(n)) + 2));
   const percent = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x * 100).toFixed(1)} %`;
+  const mm = (x: number) => `${Number((x * 1e3).toPrecision(3))} mm`;
   const wireSummary = () => {
     const d = r();
     if (!d) return '';
-    const bare = formatQuantity(d.wireDiameter, 'm', 3);
-    return enamel() === 'bare' ? `${bare} bare` : `${bare} bare, ${formatQuantity(d.overallDiameter, 'm', 3)} over grade ${enamel()} enamel (approximate maximum)`;
+    const bare = `${mm(d.wireDiameter)}${wire() === 'awg' ? ` (AWG ${awg()})` : ''}`;
+    return enamel() === 'bare' ? `${bare} bare copper` : `${bare} bare, about ${mm(d.overallDiameter)} over grade ${enamel()} enamel (approximate maximum)`;
+  };
+  /** Axis ticks: "1 MHz", "10 MHz"; uPlot leaves the unlabelled log ticks null. */
+  const frequencyTick = (x: number) => {
+    if (typeof x !== 'number' || !Number.isFinite(x)) return '';
+    const [num, unit] = formatQuantity(x, 'Hz', 3).split(' ');
+    return `${Number(num)} ${unit}`;
   };
 
   const radio = <T extends string>(name: string, legend: string, value: () => T, set: (v: T) => void, options: [T, string][]): JSX.Element => (
@@ -452,7 +459,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
 
         <Show when={form() === 'solenoid'}>
           {radio('dia', 'Diameter given is', dia, setDia, [['former', 'the former (outside)'], ['mean', 'wire centre to centre']])}
-          <QuantityField id="D" label={dia() === 'former' ? 'Former diameter' : 'Mean winding diameter'} symbol={dia() === 'former' ? 'D_f' : 'D'} q={D}
+          <QuantityField id="D" label={dia() === 'former' ? 'Former diameter' : 'Mean winding diameter'} symbol={dia() === 'former' ? undefined : 'D'} q={D}
             hint={dia() === 'former' ? 'outside of the tube you wind on; the wire’s overall diameter is added' : 'measured wire centre to wire centre'} designError={err('D')} />
           {radio('wind', 'Winding', wind, setWind, [['close', 'Close-wound'], ['pitch', 'Spaced (give pitch)']])}
           <Show when={wind() === 'pitch'}>
@@ -466,7 +473,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
           <QuantityField id="h" label="Core height" symbol="h" q={h} hint="axial thickness" designError={err('h')} />
           {radio('core', 'Core given by', core, setCore, [['mu', 'permeability μ′'], ['al', 'AL (measured or stated)']])}
           <Show when={core() === 'al'}>
-            <QuantityField id="AL" label="AL, inductance per turn²" symbol="A_L" q={AL} hint="type it in nH: 5 nH means 5 nH/turn²" designError={err('AL')} />
+            <QuantityField id="AL" label="AL, inductance per turn²" q={AL} hint="type it in nH: 5 nH means 5 nH/turn²" designError={err('AL')} />
           </Show>
           <QuantityField id="mu" label="Permeability μ′ at f" symbol="μ′" q={asField(mu)} hint="relative, plain number; 1 for an air or plastic ring" designError={err('mu')} />
           <QuantityField id="mu2" label="Loss permeability μ″ at f" symbol="μ″" q={asField(mu2)} hint="from the material’s μ′, μ″ curves; 0 if lossless" designError={err('mu2')} />
@@ -515,7 +522,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
             <p class="tw-coil-detail" id="out-turns-detail">
               <Show when={r()?.exactTurns !== undefined}>
                 Exactly {formatNumber(r()!.exactTurns!, 5)} turns give {formatQuantity(r()!.target!, 'H', 4)}; wound with{' '}
-                {formatNumber(r()!.turns, 4)} {r()!.form === 'solenoid' ? '(nearest half turn)' : '(nearest whole turn)'} it is{' '}
+                {formatNumber(r()!.turns, turnFigures(r()!.turns))} {r()!.form === 'solenoid' ? '(nearest half turn)' : '(nearest whole turn)'} it is{' '}
                 <strong>{formatQuantity(r()!.inductance, 'H', 4)}</strong> ({percent(r()!.inductance / r()!.target! - 1)}).
               </Show>
             </p>
@@ -535,7 +542,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
         </ResultRow>
 
         <Show when={form() === 'solenoid'}>
-          <ResultRow id="out-wheeler" label="Wheeler’s formula, for comparison" symbol="L_W" value={r()?.wheeler} unit="H" stale={stale()}>
+          <ResultRow id="out-wheeler" label="Wheeler’s formula, for comparison" value={r()?.wheeler} unit="H" stale={stale()}>
             <Formula html={props.formulas.wheeler} source="Wheeler, Proc. IRE 16, 1928 (r, l in inches)" validity="current sheet, within about 1 % for l > 0.4 D; no round-wire correction" />
           </ResultRow>
           <ResultRow id="out-D" label="Mean winding diameter (wire centre to centre)" symbol="D" value={r()?.meanDiameter} unit="m" stale={stale()}>
@@ -546,7 +553,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
           </ResultRow>
         </Show>
         <Show when={form() === 'toroid'}>
-          <ResultRow id="out-al" label="AL of the core" symbol="A_L" value={r()?.al} unit="H" stale={stale()} significant={4}>
+          <ResultRow id="out-al" label="AL of the core" value={r()?.al} unit="H" stale={stale()} significant={4}>
             <p class="tw-coil-detail">Per turn². <Show when={r()?.pathLength !== undefined}>From the dimensions: magnetic path l<sub>e</sub> = {formatQuantity(r()!.pathLength!, 'm', 4)}, area A<sub>e</sub> = {formatNumber(r()!.area! * 1e6, 4)} mm².</Show></p>
             <Formula html={props.formulas.pathLength} source="IEC 60205 core factors" validity="rectangular section" />
           </ResultRow>
@@ -557,12 +564,12 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
           <Formula html={form() === 'solenoid' ? props.formulas.wireSolenoid : form() === 'toroid' ? props.formulas.wireToroid : props.formulas.wireMultilayer}
             source={form() === 'toroid' ? 'geometry (our estimate: wire centre line round the core’s section)' : 'geometry of the helix'} />
         </ResultRow>
-        <ResultRow id="out-rdc" label="DC resistance" symbol="R_dc" value={r()?.dcResistance} unit="Ω" stale={stale()}>
+        <ResultRow id="out-rdc" label="DC resistance" value={r()?.dcResistance} unit="Ω" stale={stale()}>
           <Formula html={props.formulas.rdc} source="IEC 60028 annealed copper, ρ₂₀ = 1/58 Ω·mm²/m, α = 0.00393 /K" />
         </ResultRow>
 
         <Show when={form() !== 'multilayer'}>
-          <ResultRow id="out-rac" label={`AC resistance at ${r() ? formatQuantity(r()!.frequency, 'Hz') : 'f'}`} symbol="R_ac" value={r()?.acResistance} unit="Ω" stale={stale()}>
+          <ResultRow id="out-rac" label={`AC resistance at ${r() ? formatQuantity(r()!.frequency, 'Hz') : 'f'}`} value={r()?.acResistance} unit="Ω" stale={stale()}>
             <Show when={form() === 'solenoid'}>
               <Formula html={props.formulas.racSolenoid} source="Butterworth 1922 (exact skin effect; transverse-field loss in a long-coil field)" validity="best for l/D ≥ 1 and d/p ≤ 0.7; overstates the loss of close-wound coils" />
             </Show>
@@ -586,14 +593,14 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
         </Show>
 
         <Show when={form() === 'solenoid'}>
-          <ResultRow id="out-cself" label="Self-capacitance" symbol="C_s" value={r()?.selfCapacitance} unit="F" stale={stale()}>
+          <ResultRow id="out-cself" label="Self-capacitance" symbol="Cₛ" value={r()?.selfCapacitance} unit="F" stale={stale()}>
             <Formula html={props.formulas.cself} source="Medhurst, Wireless Engineer 24, 1947" validity="0.1 ≤ l/D ≤ 50, about ±5 % for his coils; surroundings add to it" />
           </ResultRow>
-          <ResultRow id="out-srf" label="Self-resonant frequency" symbol="f_sr" value={r()?.srf} unit="Hz" stale={stale()}>
+          <ResultRow id="out-srf" label="Self-resonant frequency" value={r()?.srf} unit="Hz" stale={stale()}>
             <Formula html={props.formulas.srf} source="lumped model" validity="an estimate: the winding is really a helical line; keep f below about half of it" />
           </ResultRow>
           <ResultRow id="out-lapp" label={`Apparent inductance at ${r() ? formatQuantity(r()!.frequency, 'Hz') : 'f'}`} symbol="L′" value={r()?.apparentInductance} unit="H" stale={stale()} significant={5}>
-            <Formula html={props.formulas.apparent} source="Terman, Radio Engineers’ Handbook, 1943" validity="Q ≫ 1 and f well below f_sr" />
+            <Formula html={props.formulas.apparent} source="Terman, Radio Engineers’ Handbook, 1943" validity="Q ≫ 1 and f well below the self-resonant frequency" />
           </ResultRow>
         </Show>
 
@@ -613,8 +620,8 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
             ]}
             yLabel="Q"
             y2Label={`L′ (${plotScale().unit})`}
-            markers={[{ x: r()!.frequency, label: 'f' }, { x: 0.5 * r()!.srf!, label: '½ f_sr' }]}
-            formatX={(x) => formatQuantity(x, 'Hz', 3)}
+            markers={[{ x: r()!.frequency, label: 'f' }, { x: 0.5 * r()!.srf!, label: '½ SRF' }]}
+            formatX={frequencyTick}
             stale={stale()}
           />
         </Show>
