@@ -409,8 +409,12 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
     return `/tank/?${params.toString()}`;
   });
 
-  /** Figures that show a half turn and no more: 10.5, 124, 7.0. */
-  const turnFigures = (n: number | undefined) => (n === undefined || !(n > 0) ? 3 : Math.max(2, Math.floor(Math.log10(n)) + 2));
+  /** Figures that show a half turn on a solenoid (10.5, 7.0) and whole turns elsewhere (46). */
+  const turnFigures = (n: number | undefined) => {
+    if (n === undefined || !(n > 0)) return 3;
+    const digits = Math.floor(Math.log10(n)) + 1;
+    return r()?.form === 'solenoid' ? Math.max(2, digits + 1) : Math.max(1, digits);
+  };
   const percent = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x * 100).toFixed(1)} %`;
   const mm = (x: number) => `${Number((x * 1e3).toPrecision(3))} mm`;
   const wireSummary = () => {
@@ -562,7 +566,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
         <ResultRow id="out-wire" label="Wire to cut" symbol="ℓ" value={r()?.wireLength} unit="m" stale={stale()}>
           <p class="tw-coil-detail">Includes both leads; add your own allowance for stripping and soldering.</p>
           <Formula html={form() === 'solenoid' ? props.formulas.wireSolenoid : form() === 'toroid' ? props.formulas.wireToroid : props.formulas.wireMultilayer}
-            source={form() === 'toroid' ? 'geometry (our estimate: wire centre line round the core’s section)' : 'geometry of the helix'} />
+            source={form() === 'toroid' ? 'geometry (our estimate: wire centre line round the core’s section)' : form() === 'multilayer' ? 'mean turn length times turns' : 'geometry of the helix'} />
         </ResultRow>
         <ResultRow id="out-rdc" label="DC resistance" value={r()?.dcResistance} unit="Ω" stale={stale()}>
           <Formula html={props.formulas.rdc} source="IEC 60028 annealed copper, ρ₂₀ = 1/58 Ω·mm²/m, α = 0.00393 /K" />
