@@ -122,6 +122,11 @@ function offerFile(name: string, text: string, type: string): void {
   setTimeout(() => URL.revokeObjectURL(url), 5000);
 }
 
+/** Axis and legend labels: engineering notation without trailing zeros ("6.5 MHz", "10 kΩ"); blank for ticks uPlot leaves unlabelled. */
+function tick(unit: string, significant: number) {
+  return (x: number | null): string => (x == null || !Number.isFinite(x) ? '' : formatQuantity(x, unit, significant).replace(/(\.\d*?)0+(?= )/, '$1').replace(/\.(?= )/, ''));
+}
+
 /** A small relative offset for people: per cent, or ppm below 0.01 %. */
 function relative(x: number): string {
   const a = Math.abs(x);
@@ -492,14 +497,14 @@ export default function TankBench(props: { formulas: TankFormulas }) {
             x={r()!.sweep.frequency}
             xLabel="Frequency"
             xLog={wide()}
-            formatX={(x) => formatQuantity(x, 'Hz', 3)}
+            formatX={tick('Hz', 4)}
             series={[
               { label: '|Z|', values: r()!.sweep.magnitude, unit: 'Ω' },
               { label: 'Phase', values: r()!.sweep.phase, unit: '°', axis: 'right', dash: true },
             ]}
             yLabel="|Z| (Ω)"
             yLog
-            formatY={(y) => formatQuantity(y, 'Ω', 3)}
+            formatY={tick('Ω', 3)}
             y2Label="Phase (°)"
             stale={stale()}
           />
@@ -509,7 +514,7 @@ export default function TankBench(props: { formulas: TankFormulas }) {
             x={r()!.sweep.frequency}
             xLabel="Frequency"
             xLog={wide()}
-            formatX={(x) => formatQuantity(x, 'Hz', 3)}
+            formatX={tick('Hz', 4)}
             series={[{ label: 'Response', values: r()!.sweep.response, unit: 'dB' }]}
             yLabel="Response (dB)"
             markers={markers()}
