@@ -78,7 +78,8 @@ export function Plot(props: PlotProps) {
   createEffect(() => {
     const U = lib();
     if (!U) return;
-    const shape = `${props.series.map((s) => s.label).join('|')}|${props.xLog}|${props.yLog}`;
+    // Rebuild (not just setData) when anything shown in axes or legend changes.
+    const shape = [props.xLabel, props.yLabel, props.y2Label ?? '', props.xLog, props.yLog, ...props.series.map((s) => `${s.label}/${s.unit ?? ''}/${s.axis ?? ''}`)].join('|');
     if (chart && (chart as unknown as { _shape?: string })._shape === shape) {
       chart.setData(data());
       return;
@@ -96,8 +97,8 @@ export function Plot(props: PlotProps) {
         y2: { distr: 1 },
       },
       axes: [
-        { label: props.xLabel, stroke: ink, grid: { stroke: grid }, values: props.formatX ? (_u, vals) => vals.map((v) => props.formatX!(v)) : undefined },
-        { label: props.yLabel, stroke: ink, grid: { stroke: grid }, scale: 'y', values: props.formatY ? (_u, vals) => vals.map((v) => props.formatY!(v)) : undefined },
+        { label: props.xLabel, stroke: ink, grid: { stroke: grid }, values: props.formatX ? (_u, vals) => vals.map((v) => (v == null ? '' : props.formatX!(v))) : undefined },
+        { label: props.yLabel, stroke: ink, grid: { stroke: grid }, scale: 'y', values: props.formatY ? (_u, vals) => vals.map((v) => (v == null ? '' : props.formatY!(v))) : undefined },
         ...(props.y2Label ? [{ label: props.y2Label, stroke: ink, side: 1 as const, scale: 'y2', grid: { show: false } }] : []),
       ],
       series: [
