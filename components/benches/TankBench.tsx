@@ -73,6 +73,9 @@ export const TANK_SCHEMA: UrlSchema = {
 /** Keys a Coil bench link carries; a link with these and no capacitance is a hand-over. */
 const HANDOFF_KEYS = ['L', 'coilQ', 'Cself', 'f'] as const;
 
+/** Demo terminations: a parallel tank between high resistances, a series tank between low ones. */
+const DEFAULT_TERMINATION: Record<TankMode, string> = { parallel: '10 kΩ', series: '5 Ω' };
+
 /** Points in the plotted and downloadable sweep. */
 export const SWEEP_POINTS = 1000;
 
@@ -148,8 +151,13 @@ export default function TankBench(props: { formulas: TankFormulas }) {
   const capQ = createNumber('1000', { what: 'Capacitor Q' });
   const ESR = createQuantity('Ω', '20 mΩ');
   const DF = createNumber('0.001', { what: 'Dissipation factor' });
-  const Rs = createOptionalQuantity('Ω', '10 kΩ');
-  const Rload = createOptionalQuantity('Ω', '10 kΩ');
+  const Rs = createOptionalQuantity('Ω', DEFAULT_TERMINATION.parallel);
+  const Rload = createOptionalQuantity('Ω', DEFAULT_TERMINATION.parallel);
+  /** Switching the tank swaps terminations still at the other tank's default for this one's. */
+  const switchMode = (next: TankMode) => {
+    for (const q of [Rs, Rload]) if (q.text() === DEFAULT_TERMINATION[mode()]) q.setText(DEFAULT_TERMINATION[next]);
+    setMode(next);
+  };
   const f = createOptionalQuantity('Hz', '');
   const P = createOptionalQuantity('W', '');
   const V = createOptionalQuantity('V', '1 V');
@@ -348,8 +356,8 @@ export default function TankBench(props: { formulas: TankFormulas }) {
       <div class="tw-bench-inputs">
         <fieldset class="tw-choice">
           <legend>Tank</legend>
-          <Radio name="mode" value="parallel" checked={mode() === 'parallel'} onPick={() => setMode('parallel')}>Parallel</Radio>
-          <Radio name="mode" value="series" checked={mode() === 'series'} onPick={() => setMode('series')}>Series</Radio>
+          <Radio name="mode" value="parallel" checked={mode() === 'parallel'} onPick={() => switchMode('parallel')}>Parallel</Radio>
+          <Radio name="mode" value="series" checked={mode() === 'series'} onPick={() => switchMode('series')}>Series</Radio>
         </fieldset>
 
         <fieldset class="tank-group">
@@ -439,7 +447,7 @@ export default function TankBench(props: { formulas: TankFormulas }) {
           </Show>
         </ResultRow>
         <ResultRow id="out-rd" label={shownMode() === 'parallel' ? 'Dynamic resistance (tank alone, at its peak)' : 'Resistance at resonance (tank alone)'} value={a()?.dynamicResistance} unit="Ω" stale={stale()}>
-          <Formula html={shownMode() === 'parallel' ? props.formulas.dynamicParallel : props.formulas.dynamicSeries} source="Terman 1943" validity="shown: |Z| computed at the peak; the rule agrees for Q above about 10" />
+          <Formula html={shownMode() === 'parallel' ? props.formulas.dynamicParallel : props.formulas.dynamicSeries} source="Terman 1943" validity={`shown: |Z| computed at the ${shownMode() === 'parallel' ? 'peak' : 'dip'}; the rule agrees for Q above about 10`} />
           <Show when={a()}>
             <p class="tw-formula-meta">With source and load: |Z| = {formatQuantity(a()!.loadedImpedance, 'Ω', 4)} at the loaded peak.</p>
           </Show>

@@ -81,6 +81,9 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     const { page, errors } = await openPage(browser, `${site.origin}/tank/`);
     await hydrated(page);
     await page.locator('input[name=mode][value=series]').check();
+    // the demo terminations follow the tank: high across a parallel tank, low in a series loop
+    expect(await page.locator('#Rs').inputValue()).toBe('5 Ω');
+    expect(await page.locator('#Rload').inputValue()).toBe('5 Ω');
     await retype(page, 'L', '2.2u');
     await retype(page, 'coilQ', '200');
     await retype(page, 'C', '470p');
@@ -187,6 +190,21 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     const fr = await valueOf(page, 'out-f');
     expectRelative(await valueOf(page, 'out-qcoil'), (180 * fr) / 7.1e6, 1e-3);
     expect(errors).toEqual([]);
+  });
+
+  it('works from the keyboard alone', async () => {
+    const { page } = await openPage(browser, `${site.origin}/tank/`);
+    await hydrated(page);
+    await page.locator('input[name=mode][value=parallel]').focus();
+    await page.keyboard.press('ArrowRight'); // radio group: parallel → series
+    expect(await page.locator('input[name=mode][value=series]').isChecked()).toBe(true);
+    await page.keyboard.press('Tab');
+    expect(await page.evaluate(() => document.activeElement?.id)).toBe('L');
+    await page.keyboard.press('Control+A');
+    await page.keyboard.type('2u2');
+    await expect.poll(() => page.locator('#L').inputValue()).toBe('2u2');
+    // 2.2 µH with the 100 pF demo capacitor (Terman 1943)
+    await expect.poll(async () => Math.abs(await valueOf(page, 'out-f') / thomson(2.2e-6, 100e-12) - 1)).toBeLessThan(1e-6);
   });
 
   it('downloads the SPICE netlist and the sweep as CSV', async () => {
