@@ -18,6 +18,8 @@ import { createComputation } from '../kit/compute';
 import { Formula } from '../kit/Formula';
 import { NoteList } from '../kit/Note';
 import { Plot } from '../kit/Plot';
+import { Choice } from '../kit/Choice';
+import { LinkNotices } from '../kit/LinkNotices';
 import { QuantityField } from '../kit/QuantityField';
 import { createQuantity, type QuantityState } from '../kit/quantityState';
 import { ResultRow } from '../kit/ResultRow';
@@ -230,7 +232,6 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
     }
     return u;
   });
-  const shown = (id: string) => used().includes(id);
 
   function design(): CoilDesign | undefined {
     const ids = used();
@@ -431,26 +432,12 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
   };
 
   const radio = <T extends string>(name: string, legend: string, value: () => T, set: (v: T) => void, options: [T, string][]): JSX.Element => (
-    <fieldset class="tw-choice">
-      <legend>{legend}</legend>
-      <For each={options}>
-        {([v, label]) => (
-          <label>
-            <input type="radio" name={name} value={v} checked={value() === v} onChange={() => set(v)} />
-            {' '}{label}
-          </label>
-        )}
-      </For>
-    </fieldset>
+    <Choice name={name} legend={legend} value={value()} onChoose={set} options={options} />
   );
 
   return (
     <div class="tw-bench tw-coil" data-bench="coil">
-      <Show when={notices().length > 0}>
-        <div class="tw-link-notices" role="status">
-          <For each={notices()}>{(n) => <p>{n}</p>}</For>
-        </div>
-      </Show>
+      <LinkNotices notices={notices()} />
       <div class="tw-bench-inputs">
         {radio('form', 'Coil form', form, setForm, [['solenoid', 'Single-layer'], ['toroid', 'Toroid'], ['multilayer', 'Multilayer']])}
         {radio('give', 'You give', given, setGiven, [['L', 'Inductance → turns'], ['N', 'Turns → inductance']])}

@@ -10,8 +10,10 @@ import {
 } from '../../src/core';
 import { formatQuantity } from '../../src/quantity';
 import { createComputation } from '../kit/compute';
+import { Choice } from '../kit/Choice';
 import { Formula } from '../kit/Formula';
 import { NoteList } from '../kit/Note';
+import { LinkNotices } from '../kit/LinkNotices';
 import { QuantityField } from '../kit/QuantityField';
 import { createQuantity } from '../kit/quantityState';
 import { ResultRow } from '../kit/ResultRow';
@@ -111,23 +113,9 @@ export default function ResonanceBench(props: { formulas: ResonanceFormulas }) {
 
   return (
     <div class="tw-bench" data-bench="resonance">
-      <Show when={notices().length > 0}>
-        <div class="tw-link-notices" role="status">
-          <For each={notices()}>{(n) => <p>{n}</p>}</For>
-        </div>
-      </Show>
+      <LinkNotices notices={notices()} />
       <div class="tw-bench-inputs">
-        <fieldset class="tw-choice">
-          <legend>Solve for</legend>
-          <For each={['f', 'L', 'C'] as Unknown[]}>
-            {(u) => (
-              <label>
-                <input type="radio" name="solve" value={u} checked={solve() === u} onChange={() => setSolve(u)} />
-                {' '}{NAMES[u]}
-              </label>
-            )}
-          </For>
-        </fieldset>
+        <Choice name="solve" legend="Solve for" value={solve()} onChoose={setSolve} options={(['f', 'L', 'C'] as Unknown[]).map((u) => [u, NAMES[u]] as const)} />
         <Show when={known('f')}>
           <QuantityField id="f" label="Frequency" symbol="f" q={f} hint="e.g. 7.1 MHz, 455k, 1.6e6" designError={fieldError('f')} />
         </Show>

@@ -9,7 +9,7 @@
  * L (inductance text), coilQ (plain number), Cself (capacitance text),
  * f (frequency text, where the Q was worked out).
  */
-import { createMemo, createSignal, For, Show, type JSX } from 'solid-js';
+import { createMemo, createSignal, Show } from 'solid-js';
 import {
   analyzeTank, seriesToParallelResistance, sweepTank, tankNetlist, tankStress,
   type DesignNote, type TankInput, type TankMode, type TankStressInput,
@@ -21,6 +21,8 @@ import { NoteList } from '../kit/Note';
 import { createNumber } from '../kit/numberState';
 import { createOptionalQuantity } from '../kit/optionalQuantity';
 import { Plot } from '../kit/Plot';
+import { Choice } from '../kit/Choice';
+import { LinkNotices } from '../kit/LinkNotices';
 import { QuantityField } from '../kit/QuantityField';
 import { createQuantity } from '../kit/quantityState';
 import { ResultRow } from '../kit/ResultRow';
@@ -336,38 +338,19 @@ export default function TankBench(props: { formulas: TankFormulas }) {
     return m;
   };
 
-  const Radio = (p: { name: string; value: string; checked: boolean; onPick: () => void; children: JSX.Element }) => (
-    <label>
-      <input type="radio" name={p.name} value={p.value} checked={p.checked} onChange={p.onPick} />
-      {' '}{p.children}
-    </label>
-  );
-
   return (
     <div class="tw-bench tank-bench" data-bench="tank">
-      <Show when={notices().length > 0}>
-        <div class="tw-link-notices" role="status">
-          <For each={notices()}>{(n) => <p>{n}</p>}</For>
-        </div>
-      </Show>
+      <LinkNotices notices={notices()} />
       <Show when={handoff()}>
         <p class="tank-handoff" role="status" id="handoff">{handoff()}</p>
       </Show>
       <div class="tw-bench-inputs">
-        <fieldset class="tw-choice">
-          <legend>Tank</legend>
-          <Radio name="mode" value="parallel" checked={mode() === 'parallel'} onPick={() => switchMode('parallel')}>Parallel</Radio>
-          <Radio name="mode" value="series" checked={mode() === 'series'} onPick={() => switchMode('series')}>Series</Radio>
-        </fieldset>
+        <Choice name="mode" legend="Tank" value={mode()} onChoose={switchMode} options={[['parallel', 'Parallel'], ['series', 'Series']]} />
 
         <fieldset class="tank-group">
           <legend>Coil</legend>
           <QuantityField id="L" label="Inductance" symbol="L" q={L} hint="e.g. 4.7 µH, 4u7, 220n" designError={fieldError('L')} />
-          <fieldset class="tw-choice tank-sub">
-            <legend>Coil loss given as</legend>
-            <Radio name="coilLoss" value="Q" checked={coilLoss() === 'Q'} onPick={() => setCoilLoss('Q')}>Q</Radio>
-            <Radio name="coilLoss" value="R" checked={coilLoss() === 'R'} onPick={() => setCoilLoss('R')}>Series resistance</Radio>
-          </fieldset>
+          <Choice class="tank-sub" name="coilLoss" legend="Coil loss given as" value={coilLoss()} onChoose={setCoilLoss} options={[['Q', 'Q'], ['R', 'Series resistance']]} />
           <Show when={coilLoss() === 'Q'} fallback={
             <QuantityField id="Rcoil" label="Coil series resistance" symbol="R" q={Rcoil} hint="AC resistance at the working frequency, e.g. 1.4 Ω, 1R4" designError={fieldError('Rcoil')} />
           }>
@@ -379,12 +362,7 @@ export default function TankBench(props: { formulas: TankFormulas }) {
         <fieldset class="tank-group">
           <legend>Capacitor</legend>
           <QuantityField id="C" label="Capacitance" symbol="C" q={C} hint="e.g. 100 pF, 4n7, 2*47p" designError={fieldError('C')} />
-          <fieldset class="tw-choice tank-sub">
-            <legend>Capacitor loss given as</legend>
-            <Radio name="capLoss" value="Q" checked={capLoss() === 'Q'} onPick={() => setCapLoss('Q')}>Q</Radio>
-            <Radio name="capLoss" value="ESR" checked={capLoss() === 'ESR'} onPick={() => setCapLoss('ESR')}>ESR</Radio>
-            <Radio name="capLoss" value="DF" checked={capLoss() === 'DF'} onPick={() => setCapLoss('DF')}>tan δ</Radio>
-          </fieldset>
+          <Choice class="tank-sub" name="capLoss" legend="Capacitor loss given as" value={capLoss()} onChoose={setCapLoss} options={[['Q', 'Q'], ['ESR', 'ESR'], ['DF', 'tan δ']]} />
           <Show when={capLoss() === 'Q'}>
             <QuantityField id="capQ" label="Capacitor Q" symbol="Q" q={capQ} hint="plain number, e.g. 1000 (NP0/C0G ceramic, mica: 1000 and up)" designError={fieldError('capQ')} />
           </Show>
@@ -405,11 +383,7 @@ export default function TankBench(props: { formulas: TankFormulas }) {
 
         <fieldset class="tank-group">
           <legend>Drive and ratings</legend>
-          <fieldset class="tw-choice tank-sub">
-            <legend>Drive given as</legend>
-            <Radio name="drive" value="V" checked={drive() === 'V'} onPick={() => setDrive('V')}>Voltage</Radio>
-            <Radio name="drive" value="P" checked={drive() === 'P'} onPick={() => setDrive('P')}>Power</Radio>
-          </fieldset>
+          <Choice class="tank-sub" name="drive" legend="Drive given as" value={drive()} onChoose={setDrive} options={[['V', 'Voltage'], ['P', 'Power']]} />
           <Show when={drive() === 'V'} fallback={
             <QuantityField id="P" label="RF power into tank and load (optional)" symbol="P" q={P} hint="e.g. 5 W, 100m; blank: no stress figures" designError={fieldError('P')} />
           }>

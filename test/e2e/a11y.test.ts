@@ -7,9 +7,8 @@ import { readdirSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { createRequire } from 'node:module';
 import { readFileSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { browserAvailable, DIST, hydrated, launch, openPage, serveSite, type Site } from './harness';
+import { describe, expect, it } from 'vitest';
+import { browserAvailable, DIST, hydrated, openPage, useSiteAndBrowser } from './harness';
 
 const require = createRequire(import.meta.url);
 const axeSource = readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8');
@@ -26,16 +25,7 @@ function routes(dir = DIST, out: string[] = []): string[] {
 interface AxeViolation { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }
 
 describe.runIf(browserAvailable())('axe-core on every page', () => {
-  let site: Site;
-  let browser: Browser;
-  beforeAll(async () => {
-    site = await serveSite();
-    browser = await launch();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await site?.close();
-  });
+  const env = useSiteAndBrowser();
 
   const pages = browserAvailable() ? routes() : [];
   it('finds the built pages', () => {
@@ -45,7 +35,7 @@ describe.runIf(browserAvailable())('axe-core on every page', () => {
 
   for (const scheme of ['light', 'dark'] as const) {
     it.each(pages)(`%s has no serious or critical violations (${scheme})`, async (route) => {
-      const { page } = await openPage(browser, site.origin + route, { colorScheme: scheme });
+      const { page } = await openPage(env.browser, env.site.origin + route, { colorScheme: scheme });
       await hydrated(page);
       await page.addScriptTag({ content: axeSource });
       const violations = await page.evaluate(async () => {

@@ -5,9 +5,9 @@
  * computed here, independently of the core, from the formulas named beside
  * each check.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { browserAvailable, hydrated, launch, openPage, serveSite, type Site } from './harness';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { browserAvailable, hydrated, openPage, retype, useSiteAndBrowser, valueOf } from './harness';
 
 const MU0 = 1.25663706212e-6; // CODATA 2018
 const RHO_CU = 1 / 58e6; // IEC 60028, annealed copper at 20 °C, Ω·m
@@ -31,33 +31,15 @@ function wheelerTurns(radius: number, pitch: number, target: number): number {
   return (lo + hi) / 2;
 }
 
-async function valueOf(page: Page, id: string): Promise<number> {
-  const raw = await page.locator(`#${id} output`).getAttribute('data-value');
-  return raw === null || raw === '' ? NaN : Number(raw);
-}
-
-async function retype(page: Page, id: string, text: string) {
-  await page.locator(`#${id}`).fill(text);
-}
-
 async function choose(page: Page, name: string, value: string) {
   await page.locator(`input[name=${name}][value=${value}]`).check();
 }
 
 describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
-  let site: Site;
-  let browser: Browser;
-  beforeAll(async () => {
-    site = await serveSite();
-    browser = await launch();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await site?.close();
-  });
+  const env = useSiteAndBrowser();
 
   it('designs a spaced single-layer coil from a target inductance, then finds the inductance from turns', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/coil/`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/coil/`);
     await hydrated(page);
     await choose(page, 'form', 'solenoid');
     await choose(page, 'give', 'L');
@@ -129,7 +111,7 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
   });
 
   it('computes a toroid from its dimensions and μr, and from a typed AL', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/coil/`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/coil/`);
     await hydrated(page);
     await choose(page, 'form', 'toroid');
     await choose(page, 'give', 'N');
@@ -163,7 +145,7 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
   });
 
   it('shows bad input at its field, keeps the last result marked stale, and logs no console error', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/coil/?form=solenoid&give=N&N=10&dia=mean&D=15mm&wind=pitch&p=1.5mm&wire=mm&wd=0.8mm&enamel=bare&f=7MHz`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/coil/?form=solenoid&give=N&N=10&dia=mean&D=15mm&wind=pitch&p=1.5mm&wire=mm&wd=0.8mm&enamel=bare&f=7MHz`);
     await hydrated(page);
     await expect.poll(() => valueOf(page, 'out-L')).toBeGreaterThan(0);
     const before = await valueOf(page, 'out-L');
@@ -196,8 +178,8 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
   });
 
   it('restores a design from its URL and writes the design into the URL', async () => {
-    const url = `${site.origin}/coil/?form=toroid&give=N&N=25&core=mu&OD=20mm&ID=10mm&h=6mm&mu=8&mu2=0.2&wire=awg&awg=26&enamel=2&f=3.6MHz&lead=20mm&T=40`;
-    const { page } = await openPage(browser, url);
+    const url = `${env.site.origin}/coil/?form=toroid&give=N&N=25&core=mu&OD=20mm&ID=10mm&h=6mm&mu=8&mu2=0.2&wire=awg&awg=26&enamel=2&f=3.6MHz&lead=20mm&T=40`;
+    const { page } = await openPage(env.browser, url);
     await hydrated(page);
     expect(await page.locator('input[name=form][value=toroid]').isChecked()).toBe(true);
     expect(await page.locator('#N').inputValue()).toBe('25');
@@ -211,7 +193,7 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
     await retype(page, 'N', '30');
     await expect.poll(() => page.url()).toContain('N=30');
     expect(page.url()).toContain('awg=26');
-    const again = await openPage(browser, page.url());
+    const again = await openPage(env.browser, page.url());
     await hydrated(again.page);
     expect(await again.page.locator('#N').inputValue()).toBe('30');
     expect(await again.page.locator('input[name=form][value=toroid]').isChecked()).toBe(true);
@@ -221,7 +203,7 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
 
   it('ignores a hostile query string with a visible notice and never injects it', async () => {
     const hostile = `?form=<img src=x onerror=alert(1)>&D=<script>window.__pwned=1</script>&N=1e999999&mu=${'9'.repeat(500)}&awg=99&f=7.1MHz&zap=1`;
-    const { page, errors } = await openPage(browser, `${site.origin}/coil/${hostile}`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/coil/${hostile}`);
     await hydrated(page);
     const notice = page.locator('.tw-link-notices');
     await expect.poll(() => notice.count()).toBe(1);
@@ -237,12 +219,12 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
   });
 
   it('hands the coil to the tank bench with L, Q, self-capacitance and frequency', async () => {
-    const { page } = await openPage(browser, `${site.origin}/coil/?form=solenoid&give=N&N=15&dia=mean&D=25mm&wind=pitch&p=2mm&wire=mm&wd=1mm&enamel=bare&f=5MHz&lead=10mm`);
+    const { page } = await openPage(env.browser, `${env.site.origin}/coil/?form=solenoid&give=N&N=15&dia=mean&D=25mm&wind=pitch&p=2mm&wire=mm&wd=1mm&enamel=bare&f=5MHz&lead=10mm`);
     await hydrated(page);
     await expect.poll(() => valueOf(page, 'out-q')).toBeGreaterThan(0);
     const href = await page.locator('#to-tank').getAttribute('href');
     expect(href).toMatch(/^\/tank\/\?/);
-    const params = new URL(href!, site.origin).searchParams;
+    const params = new URL(href!, env.site.origin).searchParams;
     expect([...params.keys()].sort()).toEqual(['Cself', 'L', 'coilQ', 'f']);
     expect(params.get('f')).toBe('5.0000 MHz');
     // coilQ is a plain number with 5 significant figures, the Q on screen

@@ -5,6 +5,7 @@
 import { createServer, type Server } from 'node:http';
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import { extname, join, normalize, resolve } from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { chromiumPath, requireTool } from '../helpers/tools';
 
@@ -85,4 +86,42 @@ export async function openPage(browser: Browser, url: string, options: { colorSc
 /** Waits until the Solid islands on the page have hydrated. */
 export async function hydrated(page: Page): Promise<void> {
   await page.waitForFunction(() => [...document.querySelectorAll('astro-island')].every((el) => !el.hasAttribute('ssr')));
+}
+
+/**
+ * Registers beforeAll/afterAll that serve the site and start Chromium for a
+ * describe block; read `env.site` and `env.browser` inside its tests.
+ */
+export function useSiteAndBrowser(): { readonly site: Site; readonly browser: Browser } {
+  let site: Site | undefined;
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    site = await serveSite();
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await site?.close();
+  });
+  return {
+    get site() {
+      if (!site) throw new Error('the site is not being served yet');
+      return site;
+    },
+    get browser() {
+      if (!browser) throw new Error('Chromium has not started yet');
+      return browser;
+    },
+  };
+}
+
+/** The SI value a ResultRow shows (its data-value), NaN when it shows none. */
+export async function valueOf(page: Page, id: string): Promise<number> {
+  const raw = await page.locator(`#${id} output`).getAttribute('data-value');
+  return raw === null || raw === '' ? Number.NaN : Number(raw);
+}
+
+/** Replaces the text of the input with this id, as typing would. */
+export async function retype(page: Page, id: string, text: string): Promise<void> {
+  await page.locator(`#${id}`).fill(text);
 }

@@ -3,35 +3,16 @@
  * bookmarked link, and a hostile link. Expected values are computed here from
  * Thomson's formula independently of the core (Terman 1943).
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { browserAvailable, hydrated, launch, openPage, serveSite, type Site } from './harness';
+import { describe, expect, it } from 'vitest';
+import { browserAvailable, hydrated, openPage, retype, useSiteAndBrowser, valueOf } from './harness';
 
 const thomson = (L: number, C: number) => 1 / (2 * Math.PI * Math.sqrt(L * C));
 
-async function valueOf(page: Page, id: string): Promise<number> {
-  const raw = await page.locator(`#${id} output`).getAttribute('data-value');
-  return Number(raw);
-}
-
-async function retype(page: Page, id: string, text: string) {
-  await page.locator(`#${id}`).fill(text);
-}
-
 describe.runIf(browserAvailable())('Resonance bench in Chromium', () => {
-  let site: Site;
-  let browser: Browser;
-  beforeAll(async () => {
-    site = await serveSite();
-    browser = await launch();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await site?.close();
-  });
+  const env = useSiteAndBrowser();
 
   it('solves for C from f and L, and for f from L and C, as you type', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/resonance/`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/resonance/`);
     await hydrated(page);
     await retype(page, 'f', '7.1 MHz');
     await retype(page, 'L', '4u7');
@@ -54,7 +35,7 @@ describe.runIf(browserAvailable())('Resonance bench in Chromium', () => {
   });
 
   it('shows a clear message at the field for bad input, keeps the last result marked stale, no console error', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/resonance/?solve=C&f=7.1MHz&L=4.7uH`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/resonance/?solve=C&f=7.1MHz&L=4.7uH`);
     await hydrated(page);
     await expect.poll(() => valueOf(page, 'out-C')).toBeGreaterThan(0);
     const before = await valueOf(page, 'out-C');
@@ -76,14 +57,14 @@ describe.runIf(browserAvailable())('Resonance bench in Chromium', () => {
   });
 
   it('restores a design from its URL, and writes the design into the URL', async () => {
-    const { page } = await openPage(browser, `${site.origin}/resonance/?solve=L&f=455k&C=2*100p`);
+    const { page } = await openPage(env.browser, `${env.site.origin}/resonance/?solve=L&f=455k&C=2*100p`);
     await hydrated(page);
     expect(await page.locator('#f').inputValue()).toBe('455k');
     expect(await page.locator('#C').inputValue()).toBe('2*100p');
     await expect.poll(() => valueOf(page, 'out-L'), { timeout: 10_000 }).toBeCloseTo(1 / ((2 * Math.PI * 455e3) ** 2 * 200e-12), 12);
     await retype(page, 'f', '10.7 MHz');
     await expect.poll(() => page.url()).toContain('f=10.7+MHz');
-    const again = await openPage(browser, page.url());
+    const again = await openPage(env.browser, page.url());
     await hydrated(again.page);
     expect(await again.page.locator('#f').inputValue()).toBe('10.7 MHz');
     expect(await again.page.locator('input[name=solve][value=L]').isChecked()).toBe(true);
@@ -91,7 +72,7 @@ describe.runIf(browserAvailable())('Resonance bench in Chromium', () => {
 
   it('ignores a hostile query string with a visible notice and never injects it', async () => {
     const hostile = `?solve=<img src=x onerror=alert(1)>&L=<script>window.__pwned=1</script>&C=${'9'.repeat(500)}&f=7.1MHz&x=1`;
-    const { page, errors } = await openPage(browser, `${site.origin}/resonance/${hostile}`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/resonance/${hostile}`);
     await hydrated(page);
     const notice = page.locator('.tw-link-notices');
     await expect.poll(() => notice.count()).toBe(1);
@@ -105,7 +86,7 @@ describe.runIf(browserAvailable())('Resonance bench in Chromium', () => {
   });
 
   it('works from the keyboard alone', async () => {
-    const { page } = await openPage(browser, `${site.origin}/resonance/`);
+    const { page } = await openPage(env.browser, `${env.site.origin}/resonance/`);
     await hydrated(page);
     await page.locator('input[name=solve][value=C]').focus();
     await page.keyboard.press('ArrowLeft'); // radio group: C → L

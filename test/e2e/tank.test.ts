@@ -9,40 +9,21 @@
  * below allow for that and no more.
  */
 import { readFileSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { browserAvailable, hydrated, launch, openPage, serveSite, type Site } from './harness';
+import { describe, expect, it } from 'vitest';
+import { browserAvailable, hydrated, openPage, retype, useSiteAndBrowser, valueOf } from './harness';
 
 const TWO_PI = 2 * Math.PI;
 const thomson = (L: number, C: number) => 1 / (TWO_PI * Math.sqrt(L * C));
-
-async function valueOf(page: Page, id: string): Promise<number> {
-  const raw = await page.locator(`#${id} output`).getAttribute('data-value');
-  return raw === null || raw === '' ? NaN : Number(raw);
-}
-
-async function retype(page: Page, id: string, text: string) {
-  await page.locator(`#${id}`).fill(text);
-}
 
 function expectRelative(actual: number, expected: number, tolerance: number) {
   expect(Math.abs(actual / expected - 1)).toBeLessThan(tolerance);
 }
 
 describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
-  let site: Site;
-  let browser: Browser;
-  beforeAll(async () => {
-    site = await serveSite();
-    browser = await launch();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await site?.close();
-  });
+  const env = useSiteAndBrowser();
 
   it('computes resonance, loaded Q and bandwidth of a typed parallel tank (Terman 1943 rules)', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/tank/`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/`);
     await hydrated(page);
     await page.locator('input[name=mode][value=parallel]').check();
     await retype(page, 'L', '10u');
@@ -78,7 +59,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
   });
 
   it('computes a series tank between low resistances', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/tank/`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/`);
     await hydrated(page);
     await page.locator('input[name=mode][value=series]').check();
     // the demo terminations follow the tank: high across a parallel tank, low in a series loop
@@ -105,7 +86,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
   });
 
   it('shows a clear message at the field for bad input, keeps the last result marked stale, no console error', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/tank/?mode=parallel&L=4.7u&coilQ=150&C=100p&capQ=1000&Rs=10k&Rload=10k`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/?mode=parallel&L=4.7u&coilQ=150&C=100p&capQ=1000&Rs=10k&Rload=10k`);
     await hydrated(page);
     await expect.poll(() => valueOf(page, 'out-ql')).toBeGreaterThan(0);
     const before = await valueOf(page, 'out-ql');
@@ -133,7 +114,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
   });
 
   it('restores a design from its URL, and writes the design into the URL', async () => {
-    const { page } = await openPage(browser, `${site.origin}/tank/?mode=series&L=1u&coilLoss=R&Rcoil=0.5&C=1n&capLoss=ESR&ESR=20m&Rs=1&Rload=1&drive=P&P=5`);
+    const { page } = await openPage(env.browser, `${env.site.origin}/tank/?mode=series&L=1u&coilLoss=R&Rcoil=0.5&C=1n&capLoss=ESR&ESR=20m&Rs=1&Rload=1&drive=P&P=5`);
     await hydrated(page);
     expect(await page.locator('input[name=mode][value=series]').isChecked()).toBe(true);
     expect(await page.locator('#Rcoil').inputValue()).toBe('0.5');
@@ -146,7 +127,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     expectRelative(await valueOf(page, 'out-ql'), (TWO_PI * f0 * 1e-6) / 2.52, 1e-3);
     await retype(page, 'C', '680p');
     await expect.poll(() => page.url()).toContain('C=680p');
-    const again = await openPage(browser, page.url());
+    const again = await openPage(env.browser, page.url());
     await hydrated(again.page);
     expect(await again.page.locator('#C').inputValue()).toBe('680p');
     expect(await again.page.locator('input[name=capLoss][value=ESR]').isChecked()).toBe(true);
@@ -157,7 +138,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
 
   it('ignores a hostile query string with a visible notice and never injects it', async () => {
     const hostile = `?mode=<img src=x onerror=alert(1)>&L=<script>window.__pwned=1</script>&coilQ=1e999x&C=${'9'.repeat(500)}&Rs=10k&zap=1`;
-    const { page, errors } = await openPage(browser, `${site.origin}/tank/${hostile}`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/${hostile}`);
     await hydrated(page);
     const notice = page.locator('.tw-link-notices');
     await expect.poll(() => notice.count()).toBe(1);
@@ -173,7 +154,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
 
   it('accepts a coil handed over from the Coil bench (L, coilQ, Cself, f)', async () => {
     const query = new URLSearchParams({ L: '4.7000 µH', coilQ: '180', Cself: '3.2 pF', f: '7.1000 MHz' });
-    const { page, errors } = await openPage(browser, `${site.origin}/tank/?${query}`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/?${query}`);
     await hydrated(page);
     await expect.poll(() => page.locator('#handoff').count()).toBe(1);
     expect(await page.locator('#handoff').textContent()).toMatch(/Coil bench/);
@@ -193,7 +174,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
   });
 
   it('works from the keyboard alone', async () => {
-    const { page } = await openPage(browser, `${site.origin}/tank/`);
+    const { page } = await openPage(env.browser, `${env.site.origin}/tank/`);
     await hydrated(page);
     await page.locator('input[name=mode][value=parallel]').focus();
     await page.keyboard.press('ArrowRight'); // radio group: parallel → series
@@ -208,7 +189,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
   });
 
   it('downloads the SPICE netlist and the sweep as CSV', async () => {
-    const { page, errors } = await openPage(browser, `${site.origin}/tank/?mode=parallel&L=4.7u&coilQ=150&Cself=3p&C=100p&capQ=1000&Rs=10k&Rload=10k`);
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/?mode=parallel&L=4.7u&coilQ=150&Cself=3p&C=100p&capQ=1000&Rs=10k&Rload=10k`);
     await hydrated(page);
     await expect.poll(() => valueOf(page, 'out-f')).toBeGreaterThan(0);
     const f0 = await valueOf(page, 'out-f');
