@@ -12,7 +12,7 @@ export function Note(props: { level: NoteLevel; children: JSX.Element }) {
     <div class={`tw-note tw-note--${props.level}`} role={props.level === 'caution' ? 'alert' : 'note'}>
       <strong class="tw-note-label">{LABEL[props.level]}:</strong> {props.children}
       <Show when={props.level === 'caution'}>
-        {' '}<a href="/cautions">Read the cautions</a>.
+        {' '}<a href="/cautions/">Read the cautions</a>.
       </Show>
     </div>
   );

@@ -926,8 +926,8 @@ export interface TankStress {
  * extra-low-voltage limit of IEC 61140 / IEC 60364 (120 V ripple-free DC).
  * That limit is a mains-frequency touch criterion: RF burns happen at lower
  * voltages, and dielectric breakdown and arcing are separate hazards. The
- * notes point to the Cautions page (/cautions) and defer to local codes and
- * licensed practice.
+ * notes defer to local codes and licensed practice; workbenches link each
+ * caution to the Cautions page.
  * @param input tank (SI) plus drivePower (W) or driveVoltage (V RMS), ratings (V peak, A RMS)
  * @throws DesignError naming the input at fault
  */
@@ -993,7 +993,7 @@ export function tankStress(input: TankStressInput): TankStress {
   const iCoil = vCoil / zCoil;
   const vCapPeak = Math.SQRT2 * vCap;
   const notes: DesignNote[] = [...a.notes.filter((n) => n.level !== 'info')];
-  const defer = 'See the Cautions page (/cautions) and follow local codes and licensed practice.';
+  const defer = 'Follow local codes and licensed practice.';
   if (vRating !== undefined) {
     if (vCapPeak > vRating) {
       notes.push(note('caution', `The capacitor sees ${fmt(vCapPeak, 'V')} peak, above its ${fmt(vRating, 'V')} rating: it may break down or overheat. Use a capacitor rated well above the peak RF voltage. ${defer}`, 'capacitorVoltageRating'));

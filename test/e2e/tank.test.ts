@@ -58,6 +58,24 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     expect(errors).toEqual([]);
   });
 
+  it('cautions, with a link to the Cautions page, when power makes the tank dangerous or exceeds a rating', async () => {
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/?mode=parallel&L=4.7u&coilQ=150&C=100p&capQ=1000&drive=P&P=100&Vrating=500&Irating=1`);
+    await hydrated(page);
+    // 100 W into R_D = Q_u·ωL ≈ 28 kΩ in parallel with the bench's default 10 kΩ load gives V = √(P R)
+    // ≈ 860 V RMS: above the 50 V AC extra-low-voltage limit (IEC 61140), above a 500 V capacitor
+    // rating, and I ≈ V/(ωL) ≈ 4 A circulating through a 1 A wire (Terman 1943: R_D = Q ω L)
+    const cautions = page.locator('.tw-note--caution');
+    await expect.poll(() => cautions.count()).toBe(3);
+    const text = (await cautions.allTextContents()).join(' ');
+    expect(text).toMatch(/50 V/);
+    expect(text).toMatch(/local codes and licensed practice/);
+    expect(await cautions.first().locator('a[href="/cautions/"]').count()).toBe(1);
+    const X = Math.sqrt(4.7e-6 / 100e-12); // ωL at resonance = √(L/C)
+    const R = 1 / (1 / ((1 / (1 / 150 + 1 / 1000)) * X) + 1 / 10e3);
+    expectRelative(await valueOf(page, 'out-vc'), Math.sqrt(100 * R), 0.01);
+    expect(errors).toEqual([]);
+  });
+
   it('computes a series tank between low resistances', async () => {
     const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/`);
     await hydrated(page);
