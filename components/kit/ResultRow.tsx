@@ -3,7 +3,7 @@
  * button, and optionally the formula that produced it. A stale result (inputs
  * currently invalid) stays visible, dimmed and labelled.
  */
-import { createSignal, Show, type JSX } from 'solid-js';
+import { children, createSignal, Show, type JSX } from 'solid-js';
 import { formatQuantity, formatNumber } from '../../src/quantity';
 
 export interface ResultRowProps {
@@ -39,6 +39,9 @@ async function copyText(text: string): Promise<boolean> {
 
 export function ResultRow(props: ResultRowProps) {
   const [status, setStatus] = createSignal('');
+  // Resolve the children once: reading props.children twice would build them twice,
+  // and server and browser would then disagree on hydration keys.
+  const why = children(() => props.children);
   const shown = () => formatResult(props.value, props.unit, props.significant);
   const copy = async () => {
     const ok = await copyText(shown());
@@ -61,8 +64,8 @@ export function ResultRow(props: ResultRowProps) {
         </button>
         <span class="tw-copy-status" role="status" aria-live="polite">{status()}</span>
       </div>
-      <Show when={props.children}>
-        <div class="tw-result-why">{props.children}</div>
+      <Show when={why()}>
+        <div class="tw-result-why">{why()}</div>
       </Show>
     </div>
   );
