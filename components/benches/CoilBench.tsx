@@ -9,8 +9,8 @@
 import { createMemo, createSignal, For, Show, type JSX } from 'solid-js';
 import {
   apparentCoil, awgDiameter, coilAcResistance, coilQ, DesignError, enamelledDiameter, inductanceFromAl, isDesignError,
-  medhurstSelfCapacitance, multilayerInductance, multilayerTurnsForInductance, resistivityAtTemperature,
-  selfResonantFrequency, solenoidInductance, toroidCoreQ, toroidInductance, toroidTurnsForInductance, turnsForInductance,
+  medhurstSelfCapacitance, multilayerInductance, multilayerCapacity, multilayerTurnsForInductance, resistivityAtTemperature,
+  selfResonantFrequency, solenoidInductance, toroidCoreQ, toroidInductance, toroidTurnsForInductance, toroidWinding, turnsForInductance,
   turnsFromAl, wireInternalImpedance, wireLengthForCoil, wireResistanceDc, type DesignNote,
 } from '../../src/core';
 import { formatNumber, formatQuantity } from '../../src/quantity';
@@ -343,18 +343,14 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
           notes.push(...t.notes);
         }
       }
-      // Wire round the rectangular section, its centre line half a wire outside the core on each face.
-      const perTurn = 2 * v.h + (v.OD - v.ID) + 4 * overallDiameter;
-      const wireLength = turns * perTurn + 2 * leadLength;
+      const winding = toroidWinding({ turns, outerDiameter: v.OD, innerDiameter: v.ID, height: v.h, wireDiameter: overallDiameter, leadLength });
+      const wireLength = winding.wireLength;
+      notes.push(...winding.notes);
       const dcResistance = wireResistanceDc(wireLength, wireDiameter, temperature);
       const acResistance = dcResistance * skin.resistanceRatio;
       const windingQ = (2 * Math.PI * frequency * inductance) / acResistance;
       const q = toroidCoreQ(v.mu, v.mu2, windingQ);
       const coreQ = toroidCoreQ(v.mu, v.mu2);
-      const holeTurns = Math.floor((Math.PI * (v.ID - overallDiameter)) / overallDiameter);
-      if (turns > holeTurns) {
-        notes.push({ level: 'validity', message: `${formatNumber(turns, 3)} turns of ${formatQuantity(overallDiameter, 'm', 3)} wire do not fit in one layer round the ${formatQuantity(v.ID, 'm', 3)} hole (about ${Math.max(0, holeTurns)} do): use thinner wire or a bigger core, or expect a second layer and more self-capacitance.`, field: 'ID' });
-      }
       notes.push({ level: 'info', message: "The winding's AC resistance here is the skin effect of the wire alone; the proximity of neighbouring turns adds to it, so the winding Q is an upper bound. No self-capacitance is estimated for toroids." });
       return {
         form: fm, given: given(), exactTurns, turns, inductance, target: giveL ? v.L : undefined, overallDiameter, wireDiameter,
@@ -380,7 +376,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
     }
     const wireLength = wireLengthForCoil({ turns, diameter: v.mD, pitch: 0, leadLength });
     const dcResistance = wireResistanceDc(wireLength, wireDiameter, temperature);
-    const fit = Math.floor(v.mlen / overallDiameter) * Math.floor(v.depth / overallDiameter);
+    const fit = multilayerCapacity(v.mlen, v.depth, overallDiameter);
     if (turns > fit) {
       notes.push({ level: 'validity', message: `${formatNumber(turns, 4)} turns of ${formatQuantity(overallDiameter, 'm', 3)} wire do not fit a ${formatQuantity(v.mlen, 'm', 3)} × ${formatQuantity(v.depth, 'm', 3)} winding section (about ${fit} do, wound layer on layer): make the section bigger or the wire thinner.`, field: 'depth' });
     }

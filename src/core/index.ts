@@ -71,8 +71,8 @@ export {
   apparentCoil,
 } from './selfCapacitance';
 export type { MedhurstPoint, MedhurstH, SelfCapacitanceResult, ApparentCoilInput, ApparentCoil } from './selfCapacitance';
-export { toroidInductance, toroidTurnsForInductance, inductanceFromAl, turnsFromAl, toroidCoreQ } from './toroid';
-export type { ToroidInput, ToroidResult, ToroidTurnsInput, ToroidTurnsResult } from './toroid';
+export { toroidInductance, toroidTurnsForInductance, inductanceFromAl, turnsFromAl, toroidCoreQ, toroidWinding } from './toroid';
+export type { ToroidInput, ToroidResult, ToroidTurnsInput, ToroidTurnsResult, ToroidWindingInput, ToroidWinding } from './toroid';
 export { tankNetlist } from './netlist';
 export type { TankNetlistOptions } from './netlist';
 export {
@@ -84,5 +84,5 @@ export {
   PROXIMITY_SHORT_COIL,
 } from './coilLoss';
 export type { ProximityInput, ProximityResult, CoilResistanceInput, CoilResistance, CoilQInput, CoilQ } from './coilLoss';
-export { multilayerInductance, multilayerTurnsForInductance } from './multilayer';
+export { multilayerInductance, multilayerTurnsForInductance, multilayerCapacity } from './multilayer';
 export type { MultilayerGeometry, MultilayerInput, MultilayerResult, MultilayerTurnsInput, MultilayerTurnsResult } from './multilayer';

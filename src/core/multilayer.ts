@@ -133,3 +133,19 @@ export function multilayerTurnsForInductance(input: MultilayerTurnsInput): Multi
     notes: validityNotes(termRatio),
   };
 }
+
+/**
+ * Turns of round wire that fit a rectangular winding section wound layer on
+ * layer (square stacking): ⌊b/d⌋ × ⌊c/d⌋ for winding length b, depth c and
+ * overall wire diameter d. A random ("scramble") winding holds somewhat fewer.
+ * Geometry only (common practice, no published source).
+ * @param length winding length b (m)
+ * @param windingDepth radial depth c (m)
+ * @param wireDiameter overall wire diameter, insulation included (m)
+ */
+export function multilayerCapacity(length: number, windingDepth: number, wireDiameter: number): number {
+  requirePositive('length', length, 'The winding length');
+  requirePositive('windingDepth', windingDepth, 'The winding depth');
+  requirePositive('wireDiameter', wireDiameter, 'The wire diameter');
+  return Math.floor(length / wireDiameter) * Math.floor(windingDepth / wireDiameter);
+}

@@ -208,3 +208,56 @@ export function toroidCoreQ(muReal: number, muImag: number, windingQ?: number): 
   requirePositive('windingQ', windingQ, 'Winding Q');
   return 1 / (1 / coreQ + 1 / windingQ);
 }
+
+export interface ToroidWindingInput {
+  turns: number;
+  outerDiameter: number;
+  innerDiameter: number;
+  height: number;
+  /** Overall wire diameter, insulation included (m). */
+  wireDiameter: number;
+  /** Length of each of the two leads (m); default 0. */
+  leadLength?: number;
+}
+
+export interface ToroidWinding {
+  /** Wire in one turn: the rectangle round the core section, its centre line half a wire out on each face (m). */
+  lengthPerTurn: number;
+  /** Wire to cut: all turns plus both leads (m). */
+  wireLength: number;
+  /** Turns that lie side by side in one layer round the inside of the hole. */
+  turnsPerLayer: number;
+  notes: DesignNote[];
+}
+
+/**
+ * Wire for a single-layer winding on a rectangular-section toroid, and how
+ * many turns fit in one layer round the hole.
+ *   length per turn = 2h + (OD − ID) + 4d   (each face plus half a wire each side)
+ *   turns per layer = ⌊π (ID − d) / d⌋      (wire centres on a circle of diameter ID − d)
+ * Geometry only (common practice, no published source); real windings need a
+ * little more wire for tension and spread.
+ * @param input turns, core OD, ID, height and overall wire diameter in metres
+ */
+export function toroidWinding(input: ToroidWindingInput): ToroidWinding {
+  const { turns, outerDiameter, innerDiameter, height, wireDiameter } = input;
+  requirePositive('turns', turns, 'The number of turns');
+  requirePositive('outerDiameter', outerDiameter, 'The outer diameter');
+  requirePositive('innerDiameter', innerDiameter, 'The inner diameter');
+  requirePositive('height', height, 'The core height');
+  requirePositive('wireDiameter', wireDiameter, 'The wire diameter');
+  const leadLength = requireNonNegative('leadLength', input.leadLength ?? 0, 'The lead length');
+  if (innerDiameter >= outerDiameter) {
+    throw new DesignError('innerDiameter', 'The inner diameter must be smaller than the outer diameter.');
+  }
+  if (wireDiameter >= innerDiameter) {
+    throw new DesignError('wireDiameter', 'The wire is as thick as the core’s hole: it cannot be wound through it.');
+  }
+  const lengthPerTurn = 2 * height + (outerDiameter - innerDiameter) + 4 * wireDiameter;
+  const turnsPerLayer = Math.floor((Math.PI * (innerDiameter - wireDiameter)) / wireDiameter);
+  const notes: DesignNote[] = [];
+  if (turns > turnsPerLayer) {
+    notes.push(note('validity', `${turns} turns do not fit in one layer round the hole (about ${turnsPerLayer} do): use thinner wire or a bigger core, or expect a second layer, more self-capacitance and a lower Q.`, 'innerDiameter'));
+  }
+  return { lengthPerTurn, wireLength: turns * lengthPerTurn + 2 * leadLength, turnsPerLayer, notes };
+}

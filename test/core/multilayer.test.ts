@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { createRequire } from 'node:module';
-import { multilayerInductance, multilayerTurnsForInductance, DesignError, MU_0 } from '../../src/core';
+import { multilayerCapacity, multilayerInductance, multilayerTurnsForInductance, DesignError, MU_0 } from '../../src/core';
 
 const require = createRequire(import.meta.url);
 const ellipk = require('@stdlib/math-base-special-ellipk') as (m: number) => number;
@@ -80,5 +80,14 @@ describe("Wheeler's multilayer formula", () => {
     expect(bad(() => multilayerInductance({ turns: -1, diameter: 0.02, length: 0.01, windingDepth: 0.002 }))).toBe('turns');
     expect(bad(() => multilayerTurnsForInductance({ inductance: 0, diameter: 0.02, length: 0.01, windingDepth: 0.002 }))).toBe('inductance');
     expect(bad(() => multilayerTurnsForInductance({ inductance: 1e-6, diameter: 0.02, length: Number.NaN, windingDepth: 0.002 }))).toBe('length');
+  });
+});
+
+describe('multilayerCapacity', () => {
+  it('counts square-stacked turns in the winding section', () => {
+    // hand calculation (common practice, no published source): 10 mm × 5 mm section, 0.3 mm wire
+    // ⌊10/0.3⌋ × ⌊5/0.3⌋ = 33 × 16 = 528 turns
+    expect(multilayerCapacity(10e-3, 5e-3, 0.3e-3)).toBe(528);
+    expect(() => multilayerCapacity(10e-3, 0, 0.3e-3)).toThrow(DesignError);
   });
 });

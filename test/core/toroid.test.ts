@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  toroidInductance, toroidTurnsForInductance, inductanceFromAl, turnsFromAl, toroidCoreQ, DesignError, MU_0,
+  toroidInductance, toroidTurnsForInductance, inductanceFromAl, turnsFromAl, toroidCoreQ, toroidWinding, DesignError, MU_0,
 } from '../../src/core';
 
 function fieldOf(fn: () => unknown): string {
@@ -88,5 +88,23 @@ describe('toroidCoreQ', () => {
     expect(toroidCoreQ(100, 0, 150)).toBe(150);
     expect(fieldOf(() => toroidCoreQ(100, -1))).toBe('muImag');
     expect(fieldOf(() => toroidCoreQ(100, 1, 0))).toBe('windingQ');
+  });
+});
+
+describe('toroidWinding', () => {
+  it('wire per turn and turns per layer by hand', () => {
+    // hand calculation (common practice, no published source): core 12.7 × 7.7 × 4.8 mm, 0.5 mm wire
+    // per turn = 2·4.8 + (12.7 − 7.7) + 4·0.5 = 16.6 mm; 20 turns + two 30 mm leads = 392 mm
+    // per layer = ⌊π (7.7 − 0.5) / 0.5⌋ = ⌊45.24⌋ = 45
+    const w = toroidWinding({ turns: 20, outerDiameter: 12.7e-3, innerDiameter: 7.7e-3, height: 4.8e-3, wireDiameter: 0.5e-3, leadLength: 30e-3 });
+    expect(w.lengthPerTurn).toBeCloseTo(16.6e-3, 12);
+    expect(w.wireLength).toBeCloseTo(0.392, 12);
+    expect(w.turnsPerLayer).toBe(45);
+    expect(w.notes).toEqual([]);
+  });
+  it('warns when the turns need a second layer, and refuses wire thicker than the hole', () => {
+    const w = toroidWinding({ turns: 60, outerDiameter: 12.7e-3, innerDiameter: 7.7e-3, height: 4.8e-3, wireDiameter: 0.5e-3 });
+    expect(w.notes.map((n) => n.field)).toEqual(['innerDiameter']);
+    expect(() => toroidWinding({ turns: 5, outerDiameter: 12.7e-3, innerDiameter: 2e-3, height: 4.8e-3, wireDiameter: 2e-3 })).toThrow(DesignError);
   });
 });
