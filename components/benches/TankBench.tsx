@@ -82,26 +82,11 @@ const DEFAULT_TERMINATION: Record<TankMode, string> = { parallel: '10 kΩ', seri
 export const SWEEP_POINTS = 1000;
 
 /** −3 dB as a power ratio of one half, in dB. */
-const HALF_POWER_DB = -10 * Math.log10(2);
 
 /** Sweep span around the loaded peak: ± about 6 bandwidths, log spaced, at most a decade each way. */
 function sweepSpan(centre: number, bandwidth: number): { start: number; stop: number } {
   const s = Math.min(1 + (6 * bandwidth) / centre, 10);
   return { start: centre / s, stop: centre * s };
-}
-
-/** Where the response crosses −3 dB either side of its peak, by linear interpolation in ln f. */
-function halfPowerPoints(freq: Float64Array, db: Float64Array): { lower?: number; upper?: number } {
-  let peak = 0;
-  for (let i = 1; i < db.length; i++) if (db[i] > db[peak]) peak = i;
-  const cross = (i: number, j: number) => {
-    const t = (HALF_POWER_DB - db[i]) / (db[j] - db[i]);
-    return Math.exp(Math.log(freq[i]) + t * (Math.log(freq[j]) - Math.log(freq[i])));
-  };
-  const out: { lower?: number; upper?: number } = {};
-  for (let i = peak; i > 0; i--) if (db[i - 1] < HALF_POWER_DB) { out.lower = cross(i, i - 1); break; }
-  for (let i = peak; i < db.length - 1; i++) if (db[i + 1] < HALF_POWER_DB) { out.upper = cross(i, i + 1); break; }
-  return out;
 }
 
 /** A number for a CSV cell: 10 significant figures, no exponent surprises for spreadsheets. */
@@ -257,7 +242,7 @@ export default function TankBench(props: { formulas: TankFormulas }) {
       tank: t,
       analysis,
       sweep,
-      edges: halfPowerPoints(sweep.frequency, sweep.response),
+      edges: { lower: analysis.lowerFrequency, upper: analysis.upperFrequency },
       coilParallelR: analysis.coilResistance > 0 ? seriesToParallelResistance(analysis.coilResistance, x0) : Infinity,
     };
   }, CORE_FIELDS);
@@ -417,7 +402,7 @@ export default function TankBench(props: { formulas: TankFormulas }) {
         <ResultRow id="out-bw" label="Bandwidth (−3 dB, loaded)" symbol="B" value={a()?.bandwidth} unit="Hz" stale={stale()} primary>
           <Formula html={props.formulas.bandwidth} source="Terman 1943" validity="the value shown is the exact −3 dB width of the computed response; f/Q_L agrees to about 1/Q_L²" />
           <Show when={r()?.edges.lower !== undefined && r()?.edges.upper !== undefined}>
-            <p class="tw-formula-meta" id="out-bw-edges">−3 dB points on the plotted sweep: {fmtF(r()!.edges.lower!)} and {fmtF(r()!.edges.upper!)}. Unloaded bandwidth {formatQuantity(a()!.unloadedBandwidth, 'Hz', 4)}.</p>
+            <p class="tw-formula-meta" id="out-bw-edges">−3 dB points: {fmtF(r()!.edges.lower!)} and {fmtF(r()!.edges.upper!)}. Unloaded bandwidth {formatQuantity(a()!.unloadedBandwidth, 'Hz', 4)}.</p>
           </Show>
         </ResultRow>
         <ResultRow id="out-rd" label={shownMode() === 'parallel' ? 'Dynamic resistance (tank alone, at its peak)' : 'Resistance at resonance (tank alone)'} value={a()?.dynamicResistance} unit="Ω" stale={stale()}>

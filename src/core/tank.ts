@@ -114,6 +114,9 @@ export interface TankAnalysis {
   loadedQ: number;
   /** −3 dB width of the terminated tank's impedance peak (parallel) or current peak (series), Hz; exact. */
   bandwidth: number;
+  /** Lower and upper −3 dB frequencies of the terminated response, Hz; exact (bandwidth = upper − lower). */
+  lowerFrequency: number;
+  upperFrequency: number;
   /** −3 dB width of the tank's own impedance response, Hz; exact (0 for ideal parts). */
   unloadedBandwidth: number;
   /**
@@ -691,7 +694,9 @@ export function analyzeTank(tank: TankInput): TankAnalysis {
   }
   const lr = loaded as Resonance;
   const loadedResonantFrequency = toHz(lr.u);
-  const bandwidth = toHz(lr.upper) - toHz(lr.lower);
+  const lowerFrequency = toHz(lr.lower);
+  const upperFrequency = toHz(lr.upper);
+  const bandwidth = upperFrequency - lowerFrequency;
   const loadedImpedance = t.mode === 'parallel' ? 1 / Math.sqrt(lr.value) : Math.sqrt(lr.value);
 
   // Insertion and transducer loss.
@@ -755,6 +760,8 @@ export function analyzeTank(tank: TankInput): TankAnalysis {
     externalQ: q.externalQ,
     loadedQ: q.loadedQ,
     bandwidth,
+    lowerFrequency,
+    upperFrequency,
     unloadedBandwidth,
     dynamicResistance,
     loadedImpedance,

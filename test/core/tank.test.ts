@@ -390,3 +390,17 @@ describe('tankNetlist', () => {
     expect(t.sourceResistance).toBeUndefined();
   });
 });
+
+describe('−3 dB edge frequencies', () => {
+  it('a resistor across ideal L and C: f₁,₂ = √(f0² + (B/2)²) ∓ B/2 with B = 1/(2πRC), and f₁f₂ = f0²', () => {
+    // exact algebra of the parallel GLC admittance (common practice, no published source)
+    const L = 10e-6, C = 220e-12, R = 5e3;
+    const a = analyzeTank({ inductance: L, capacitance: C, loadResistance: R });
+    const f0 = 1 / (2 * Math.PI * Math.sqrt(L * C));
+    const B = 1 / (2 * Math.PI * R * C);
+    expect(Math.abs(a.lowerFrequency / (Math.sqrt(f0 ** 2 + (B / 2) ** 2) - B / 2) - 1)).toBeLessThan(1e-9);
+    expect(Math.abs(a.upperFrequency / (Math.sqrt(f0 ** 2 + (B / 2) ** 2) + B / 2) - 1)).toBeLessThan(1e-9);
+    expect(Math.abs((a.lowerFrequency * a.upperFrequency) / f0 ** 2 - 1)).toBeLessThan(1e-9);
+    expect(a.upperFrequency - a.lowerFrequency).toBeCloseTo(a.bandwidth, 6);
+  });
+});
