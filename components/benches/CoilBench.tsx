@@ -318,13 +318,17 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
       const geometry = { outerDiameter: v.OD, innerDiameter: v.ID, height: v.h, relativePermeability: v.mu };
       const geo = toroidInductance({ ...geometry, turns: 1 });
       const al = core() === 'al' ? v.AL : geo.al;
+      // With a typed AL the permeability note does not apply.
+      const fromAl = (n: number) => {
+        notes.push(...toroidInductance({ ...geometry, turns: n }).notes.filter((x) => x.field !== 'relativePermeability'));
+        return inductanceFromAl(al, n);
+      };
       let turns: number, exactTurns: number | undefined, inductance: number;
       if (giveL) {
         if (core() === 'al') {
           exactTurns = turnsFromAl(al, v.L);
           turns = Math.max(1, Math.round(exactTurns));
-          inductance = inductanceFromAl(al, turns);
-          notes.push(...toroidInductance({ ...geometry, turns }).notes.filter((n) => n.field !== 'relativePermeability'));
+          inductance = fromAl(turns);
         } else {
           const t = toroidTurnsForInductance({ ...geometry, inductance: v.L });
           exactTurns = t.turns;
@@ -335,8 +339,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
       } else {
         turns = v.N;
         if (core() === 'al') {
-          inductance = inductanceFromAl(al, turns);
-          notes.push(...toroidInductance({ ...geometry, turns }).notes.filter((n) => n.field !== 'relativePermeability'));
+          inductance = fromAl(turns);
         } else {
           const t = toroidInductance({ ...geometry, turns });
           inductance = t.inductance;

@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { browserAvailable, hydrated, openPage, retype, useSiteAndBrowser, valueOf } from './harness';
+import { browserAvailable, hydrated, openPage, retype, expectHostileLinkIgnored, useSiteAndBrowser, valueOf } from './harness';
 
 const MU0 = 1.25663706212e-6; // CODATA 2018
 const RHO_CU = 1 / 58e6; // IEC 60028, annealed copper at 20 °C, Ω·m
@@ -205,11 +205,7 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
     const hostile = `?form=<img src=x onerror=alert(1)>&D=<script>window.__pwned=1</script>&N=1e999999&mu=${'9'.repeat(500)}&awg=99&f=7.1MHz&zap=1`;
     const { page, errors } = await openPage(env.browser, `${env.site.origin}/coil/${hostile}`);
     await hydrated(page);
-    const notice = page.locator('.tw-link-notices');
-    await expect.poll(() => notice.count()).toBe(1);
-    expect(await notice.textContent()).toMatch(/Ignored/);
-    expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
-    expect(await page.locator('img[src=x]').count()).toBe(0);
+    await expectHostileLinkIgnored(page);
     expect(await page.locator('input[name=form][value=solenoid]').isChecked()).toBe(true);
     expect(await page.locator('#D').inputValue()).toBe('10 mm');
     expect(await page.locator('#f').inputValue()).toBe('7.1MHz');

@@ -5,7 +5,7 @@
 import { createServer, type Server } from 'node:http';
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import { extname, join, normalize, resolve } from 'node:path';
-import { afterAll, beforeAll } from 'vitest';
+import { afterAll, beforeAll, expect } from 'vitest';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { chromiumPath, requireTool } from '../helpers/tools';
 
@@ -124,4 +124,17 @@ export async function valueOf(page: Page, id: string): Promise<number> {
 /** Replaces the text of the input with this id, as typing would. */
 export async function retype(page: Page, id: string, text: string): Promise<void> {
   await page.locator(`#${id}`).fill(text);
+}
+
+/**
+ * After opening a bench with a hostile link (markup in values, a script that
+ * would set window.__pwned, an <img src=x>): one visible notice says what was
+ * ignored, and nothing from the link ran or reached the page as markup.
+ */
+export async function expectHostileLinkIgnored(page: Page): Promise<void> {
+  const notice = page.locator('.tw-link-notices');
+  await expect.poll(() => notice.count()).toBe(1);
+  expect(await notice.textContent()).toMatch(/Ignored/);
+  expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
+  expect(await page.locator('img[src=x]').count()).toBe(0);
 }

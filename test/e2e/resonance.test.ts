@@ -4,7 +4,7 @@
  * Thomson's formula independently of the core (Terman 1943).
  */
 import { describe, expect, it } from 'vitest';
-import { browserAvailable, hydrated, openPage, retype, useSiteAndBrowser, valueOf } from './harness';
+import { browserAvailable, hydrated, openPage, retype, expectHostileLinkIgnored, useSiteAndBrowser, valueOf } from './harness';
 
 const thomson = (L: number, C: number) => 1 / (2 * Math.PI * Math.sqrt(L * C));
 
@@ -74,12 +74,7 @@ describe.runIf(browserAvailable())('Resonance bench in Chromium', () => {
     const hostile = `?solve=<img src=x onerror=alert(1)>&L=<script>window.__pwned=1</script>&C=${'9'.repeat(500)}&f=7.1MHz&x=1`;
     const { page, errors } = await openPage(env.browser, `${env.site.origin}/resonance/${hostile}`);
     await hydrated(page);
-    const notice = page.locator('.tw-link-notices');
-    await expect.poll(() => notice.count()).toBe(1);
-    const text = await notice.textContent();
-    expect(text).toMatch(/Ignored/);
-    expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
-    expect(await page.locator('img[src=x]').count()).toBe(0);
+    await expectHostileLinkIgnored(page);
     expect(await page.locator('#f').inputValue()).toBe('7.1MHz');
     expect(await page.locator('#L').inputValue()).toBe('4.7 µH');
     expect(errors).toEqual([]);

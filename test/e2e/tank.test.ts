@@ -10,7 +10,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { browserAvailable, hydrated, openPage, retype, useSiteAndBrowser, valueOf } from './harness';
+import { browserAvailable, hydrated, openPage, retype, expectHostileLinkIgnored, useSiteAndBrowser, valueOf } from './harness';
 
 const TWO_PI = 2 * Math.PI;
 const thomson = (L: number, C: number) => 1 / (TWO_PI * Math.sqrt(L * C));
@@ -158,11 +158,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     const hostile = `?mode=<img src=x onerror=alert(1)>&L=<script>window.__pwned=1</script>&coilQ=1e999x&C=${'9'.repeat(500)}&Rs=10k&zap=1`;
     const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/${hostile}`);
     await hydrated(page);
-    const notice = page.locator('.tw-link-notices');
-    await expect.poll(() => notice.count()).toBe(1);
-    expect(await notice.textContent()).toMatch(/Ignored/);
-    expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
-    expect(await page.locator('img[src=x]').count()).toBe(0);
+    await expectHostileLinkIgnored(page);
     expect(await page.locator('#L').inputValue()).toBe('4.7 µH');
     expect(await page.locator('#coilQ').inputValue()).toBe('150');
     expect(await page.locator('#Rs').inputValue()).toBe('10k');
