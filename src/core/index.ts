@@ -2,7 +2,8 @@
  * Tankwright core: the public API. Pure functions, SI units in and out.
  * Each module's header states the model it implements and its sources.
  */
-export { DesignError, isDesignError, requirePositive, requireNonNegative } from './errors';
+export { DesignError, isDesignError, requireFinite, requirePositive, requireNonNegative, requireInRange, requireObject, requireFiniteResult } from './errors';
+export { sayQuantity, sayMm, sayNumber, sayPercent } from './text';
 export * from './constants';
 export { note } from './notes';
 export type { DesignNote, NoteLevel } from './notes';
