@@ -37,20 +37,27 @@ export {
 export type { WireInternalImpedance } from './skin';
 export { complex, cAdd, cSub, cMul, cDiv, cInv, cParallel, cAbs, cArg } from './complex';
 export type { Complex } from './complex';
+export { analyzeTank } from './tank';
+export type { TankAnalysis } from './tank';
+export { resolveTank, TANK_VALUE_RANGE } from './tankModel';
+export type { TankMode, TankInput, ResolvedTank } from './tankModel';
+export { tankImpedance } from './tankKernel';
+export type { TankImpedanceOptions } from './tankKernel';
+export { sweepTank } from './tankSweep';
+export type { TankSweep } from './tankSweep';
+export { frequencyGrid, MAX_SWEEP_POINTS } from './sweep';
+export type { SweepOptions } from './sweep';
+export { tankStress, EXTRA_LOW_VOLTAGE_AC_RMS } from './tankStress';
+export type { TankStressInput, TankStress } from './tankStress';
+export { combineQ, combineLoadedQ, insertionLoss, seriesToParallelResistance, parallelToSeriesResistance } from './qRules';
 export {
-  analyzeTank,
-  resolveTank,
-  tankImpedance,
-  sweepTank,
-  tankStress,
-  combineQ,
-  combineLoadedQ,
-  insertionLoss,
-  seriesToParallelResistance,
-  parallelToSeriesResistance,
-  EXTRA_LOW_VOLTAGE_AC_RMS,
-} from './tank';
-export type { TankMode, TankInput, ResolvedTank, TankAnalysis, SweepOptions, TankSweep, TankStressInput, TankStress } from './tank';
+  transducerLoss,
+  mismatchLoss,
+  terminationsCollapse,
+  COLLAPSE_LOADED_Q,
+  COLLAPSE_LOAD_RATIO,
+  COLLAPSE_RATIO_LOADED_Q,
+} from './terminations';
 export {
   nagaokaCoefficient,
   rosaCorrections,

@@ -11,8 +11,11 @@
  * Sources: the SPICE2 input format (Nagel, 1975) as implemented by ngspice
  * (ngspice user manual: `.ac`, `.control`, `wrdata`).
  */
-import { DesignError } from './errors';
-import { analyzeTank, resolveTank, type SweepOptions, type TankInput } from './tank';
+import { DesignError, requireObject } from './errors';
+import { checkSweepOptions, type SweepOptions } from './sweep';
+import { analyzeTank } from './tank';
+import { resolveTank, type TankInput } from './tankModel';
+import { sayQuantity } from './text';
 
 /** Options of `tankNetlist`. */
 export interface TankNetlistOptions {
@@ -41,27 +44,30 @@ function num(x: number): string {
  * @param options sweep (Hz), data file name, title
  * @throws DesignError naming the input at fault
  */
-export function tankNetlist(tank: TankInput, options: TankNetlistOptions = {}): string {
+export function tankNetlist(tank: TankInput, options?: TankNetlistOptions): string {
+  const opts = options === undefined ? {} : requireObject<TankNetlistOptions>('options', options, 'The netlist options');
   const t = resolveTank(tank);
-  const dataFile = options.dataFile ?? 'tank-ac.data';
+  const dataFile = opts.dataFile ?? 'tank-ac.data';
   if (typeof dataFile !== 'string' || !/^[A-Za-z0-9._\/-]+$/.test(dataFile)) {
     throw new DesignError('dataFile', 'The data file name may use only letters, digits, dot, dash, underscore and slash (no spaces).');
   }
-  const title = (options.title ?? `Tankwright ${t.mode} tank`).replace(/[^\x20-\x7e]/g, ' ');
+  if (opts.title !== undefined && typeof opts.title !== 'string') {
+    throw new DesignError('title', 'The title must be text.');
+  }
+  const title = (opts.title ?? `Tankwright ${t.mode} tank`).replace(/[^\x20-\x7e]/g, ' ');
 
-  let sweep = options.sweep;
-  if (!sweep) {
+  let sweep = opts.sweep;
+  if (sweep === undefined) {
     const a = analyzeTank(tank);
     const f = a.loadedResonantFrequency;
-    const half = 5 * a.bandwidth;
+    // ±5 bandwidths, but at least ±1e-9 of f so that the 12-digit numbers still differ at enormous Q.
+    const half = Math.max(5 * a.bandwidth, 1e-9 * f);
     sweep = { start: Math.max(f - half, f / 10), stop: f + half, points: 2001, spacing: 'linear' };
   }
-  const { start, stop, points } = sweep;
-  if (!(typeof start === 'number' && start > 0 && Number.isFinite(start))) throw new DesignError('start', 'Sweep start must be a frequency above zero.');
-  if (!(typeof stop === 'number' && stop > start && Number.isFinite(stop))) throw new DesignError('stop', 'Sweep stop must be a frequency above the start.');
-  if (!(Number.isInteger(points) && points >= 2)) throw new DesignError('points', 'Sweep points must be a whole number of at least 2.');
-  const spacing = sweep.spacing ?? 'log';
-  if (spacing !== 'log' && spacing !== 'linear') throw new DesignError('spacing', 'Sweep spacing must be "log" or "linear".');
+  const { start, stop, points, spacing } = checkSweepOptions(sweep);
+  if (!(Number(num(stop)) > Number(num(start)))) {
+    throw new DesignError('stop', `Sweep stop ${sayQuantity(stop, 'Hz', 12)} and start ${sayQuantity(start, 'Hz', 12)} are the same to the netlist's 12 digits: widen the sweep.`);
+  }
   const acLine = spacing === 'linear'
     ? `.ac lin ${points} ${num(start)} ${num(stop)}`
     : `.ac dec ${Math.max(1, Math.ceil((points - 1) / Math.log10(stop / start)))} ${num(start)} ${num(stop)}`;

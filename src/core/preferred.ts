@@ -6,6 +6,7 @@
  * A value is found as a mantissa in [1, 10) times a power of ten.
  */
 import { DesignError, requirePositive } from './errors';
+import { sayNumber } from './text';
 
 export type ESeriesName = 'E3' | 'E6' | 'E12' | 'E24';
 
@@ -33,13 +34,18 @@ export interface PreferredNeighbours {
 
 /**
  * The preferred values of a series either side of `value`.
- * @param value any positive quantity in SI units (farads, ohms, …)
+ * @param value any positive quantity in SI units (farads, ohms, …), 1e−305 to 1e305
  * @param series the E-series (default E12)
  */
 export function preferredNeighbours(value: number, series: ESeriesName = 'E12'): PreferredNeighbours {
   requirePositive('value', value, 'The value');
+  if (typeof series !== 'string' || !Object.hasOwn(E_SERIES, series)) {
+    throw new DesignError('series', `Unknown series ${typeof series === 'string' ? `"${series}"` : String(series)}: use E3, E6, E12 or E24.`);
+  }
+  if (value < 1e-305 || value > 1e305) {
+    throw new DesignError('value', `The value ${sayNumber(value)} is far outside any part's: give one from 1e-305 to 1e305 in its SI unit.`);
+  }
   const mantissas = E_SERIES[series];
-  if (!mantissas) throw new DesignError('series', `Unknown series "${String(series)}": use E3, E6, E12 or E24.`);
   const decade = Math.floor(Math.log10(value));
   // Candidates over three decades around the value, so edges (9.9 → 10) work.
   const candidates: number[] = [];

@@ -7,9 +7,29 @@
  * text. Valid for lumped parts: well below the coil's self-resonance (see
  * `selfCapacitance`) and with Q high enough that loss does not shift the peak
  * (the tank module handles lossy tanks).
+ *
+ * Every function refuses a missing, non-numeric, non-finite or non-positive
+ * input, and a result that would overflow or underflow (inputs near 1e±300)
+ * with a DesignError, never a silent Infinity or zero.
  */
 import { TWO_PI } from './constants';
-import { requirePositive } from './errors';
+import { DesignError, requirePositive } from './errors';
+import { sayQuantity } from './text';
+
+/** Smallest positive double with full precision (below it, subnormals lose digits). */
+const MIN_NORMAL = 2.2250738585072014e-308;
+
+/**
+ * A result that must be a finite number above zero. Extreme inputs (1e±300)
+ * can overflow or underflow the arithmetic; then the input farther from 1 in
+ * its unit is named, never a silent Infinity or 0.
+ */
+function requireResult(value: number, what: string, inputs: ReadonlyArray<readonly [string, number, string]>): number {
+  if (Number.isFinite(value) && value >= MIN_NORMAL) return value;
+  let [field, x, unit] = inputs[0];
+  for (const input of inputs) if (Math.abs(Math.log10(input[1])) > Math.abs(Math.log10(x))) [field, x, unit] = input;
+  throw new DesignError(field, `With ${inputs.map(([, v, u]) => sayQuantity(v, u)).join(' and ')} the ${what} is beyond what can be computed: ${sayQuantity(x, unit)} is far outside anything that can be built.`);
+}
 
 /**
  * Resonant frequency f = 1 / (2π √(LC)).
@@ -18,9 +38,10 @@ import { requirePositive } from './errors';
  * @returns f in hertz
  */
 export function resonantFrequency(inductance: number, capacitance: number): number {
-  requirePositive('inductance', inductance, 'Inductance');
-  requirePositive('capacitance', capacitance, 'Capacitance');
-  return 1 / (TWO_PI * Math.sqrt(inductance * capacitance));
+  const L = requirePositive('inductance', inductance, 'Inductance', 'H');
+  const C = requirePositive('capacitance', capacitance, 'Capacitance', 'F');
+  // √L·√C: the product LC itself can overflow or underflow.
+  return requireResult(1 / (TWO_PI * Math.sqrt(L) * Math.sqrt(C)), 'resonant frequency', [['inductance', L, 'H'], ['capacitance', C, 'F']]);
 }
 
 /**
@@ -30,10 +51,10 @@ export function resonantFrequency(inductance: number, capacitance: number): numb
  * @returns L in henries
  */
 export function inductanceForFrequency(frequency: number, capacitance: number): number {
-  requirePositive('frequency', frequency, 'Frequency');
-  requirePositive('capacitance', capacitance, 'Capacitance');
-  const w = TWO_PI * frequency;
-  return 1 / (w * w * capacitance);
+  const f = requirePositive('frequency', frequency, 'Frequency', 'Hz');
+  const C = requirePositive('capacitance', capacitance, 'Capacitance', 'F');
+  const w = TWO_PI * f;
+  return requireResult(1 / w / (w * C), 'inductance', [['frequency', f, 'Hz'], ['capacitance', C, 'F']]);
 }
 
 /**
@@ -43,10 +64,10 @@ export function inductanceForFrequency(frequency: number, capacitance: number): 
  * @returns C in farads
  */
 export function capacitanceForFrequency(frequency: number, inductance: number): number {
-  requirePositive('frequency', frequency, 'Frequency');
-  requirePositive('inductance', inductance, 'Inductance');
-  const w = TWO_PI * frequency;
-  return 1 / (w * w * inductance);
+  const f = requirePositive('frequency', frequency, 'Frequency', 'Hz');
+  const L = requirePositive('inductance', inductance, 'Inductance', 'H');
+  const w = TWO_PI * f;
+  return requireResult(1 / w / (w * L), 'capacitance', [['frequency', f, 'Hz'], ['inductance', L, 'H']]);
 }
 
 /**
@@ -56,9 +77,9 @@ export function capacitanceForFrequency(frequency: number, inductance: number): 
  * @returns X_L in ohms
  */
 export function inductiveReactance(frequency: number, inductance: number): number {
-  requirePositive('frequency', frequency, 'Frequency');
-  requirePositive('inductance', inductance, 'Inductance');
-  return TWO_PI * frequency * inductance;
+  const f = requirePositive('frequency', frequency, 'Frequency', 'Hz');
+  const L = requirePositive('inductance', inductance, 'Inductance', 'H');
+  return requireResult(TWO_PI * f * L, 'reactance', [['frequency', f, 'Hz'], ['inductance', L, 'H']]);
 }
 
 /**
@@ -68,9 +89,9 @@ export function inductiveReactance(frequency: number, inductance: number): numbe
  * @returns |X_C| in ohms
  */
 export function capacitiveReactance(frequency: number, capacitance: number): number {
-  requirePositive('frequency', frequency, 'Frequency');
-  requirePositive('capacitance', capacitance, 'Capacitance');
-  return 1 / (TWO_PI * frequency * capacitance);
+  const f = requirePositive('frequency', frequency, 'Frequency', 'Hz');
+  const C = requirePositive('capacitance', capacitance, 'Capacitance', 'F');
+  return requireResult(1 / (TWO_PI * f * C), 'reactance', [['frequency', f, 'Hz'], ['capacitance', C, 'F']]);
 }
 
 /**
@@ -81,7 +102,7 @@ export function capacitiveReactance(frequency: number, capacitance: number): num
  * @returns Z0 in ohms
  */
 export function characteristicImpedance(inductance: number, capacitance: number): number {
-  requirePositive('inductance', inductance, 'Inductance');
-  requirePositive('capacitance', capacitance, 'Capacitance');
-  return Math.sqrt(inductance / capacitance);
+  const L = requirePositive('inductance', inductance, 'Inductance', 'H');
+  const C = requirePositive('capacitance', capacitance, 'Capacitance', 'F');
+  return requireResult(Math.sqrt(L) / Math.sqrt(C), 'characteristic impedance', [['inductance', L, 'H'], ['capacitance', C, 'F']]);
 }

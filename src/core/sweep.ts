@@ -39,7 +39,7 @@ export function checkSweepOptions(options: SweepOptions): Required<SweepOptions>
   }
   const spacing = options.spacing ?? 'log';
   if (spacing !== 'log' && spacing !== 'linear') {
-    throw new DesignError('spacing', `Sweep spacing must be "log" or "linear" (got ${JSON.stringify(spacing)}).`);
+    throw new DesignError('spacing', `Sweep spacing must be "log" or "linear" (got ${typeof spacing === 'string' ? JSON.stringify(spacing) : String(spacing)}).`);
   }
   return { start, stop, points: n, spacing };
 }
