@@ -6,17 +6,15 @@
  * import() (mathjs for expressions, the plot library) are listed apart.
  * Fails when a page ships more than BUDGET_KB.
  * Usage: npm run budget  (builds first)  ·  node test/scripts/budget.mjs [--json]
+ * (TANKWRIGHT_DIST=dir measures another build than dist/.)
  */
 import { readFileSync, readdirSync, statSync, existsSync } from 'node:fs';
 import { gzipSync } from 'node:zlib';
 import { join, relative, dirname, resolve, posix } from 'node:path';
+import { dist, requireBuild } from './serve.mjs';
 
 const BUDGET_KB = 60;
-const dist = resolve(import.meta.dirname, '../../dist');
-if (!existsSync(dist)) {
-  console.error('dist/ is missing: run `npm run build` first.');
-  process.exit(2);
-}
+requireBuild();
 
 function walk(dir, out = []) {
   for (const name of readdirSync(dir)) {
