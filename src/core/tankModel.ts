@@ -92,7 +92,8 @@ const AGREEMENT = 0.01;
 export function tankValue(field: string, value: unknown, what: string, unit?: string): number {
   const v = requirePositive(field, value, what, unit);
   if (v < TANK_VALUE_RANGE.min || v > TANK_VALUE_RANGE.max) {
-    const say = (x: number) => (unit ? sayQuantity(x, unit) : sayNumber(x));
+    // Plain powers of ten for values beyond the SI prefixes (sayQuantity stops at T and f).
+    const say = (x: number) => (unit ? (x >= 1e-15 && x < 1e15 ? sayQuantity(x, unit) : `${sayNumber(x)} ${unit}`) : sayNumber(x));
     throw new DesignError(field, `${what} ${say(v)} is far outside anything a tank is built from: give a value from ${say(TANK_VALUE_RANGE.min)} to ${say(TANK_VALUE_RANGE.max)}.`);
   }
   return v;

@@ -28,4 +28,7 @@ describe('tank', () => {
   bench('analyzeTank alone', () => {
     analyzeTank({ ...tank, loadResistance: 20e3 + (k++ % 100) });
   });
+  bench('analyzeTank, ideal L and C loaded to Q ≈ 1e14 (longest searches)', () => {
+    analyzeTank({ inductance: 4.7e-6, capacitance: 100e-12, loadResistance: 2.168e16 + (k++ % 100) * 1e12 });
+  });
 });

@@ -1,10 +1,14 @@
 import { describe, expect, it } from 'vitest';
+import { create, all, type Complex as MathComplex } from 'mathjs';
 import {
   analyzeTank, tankImpedance, sweepTank, tankStress, tankNetlist, resolveTank,
   combineQ, combineLoadedQ, insertionLoss, seriesToParallelResistance, parallelToSeriesResistance,
+  transducerLoss, mismatchLoss, terminationsCollapse,
   complex, cAdd, cDiv, cInv, cMul, cAbs, cArg, cParallel,
   DesignError, EXTRA_LOW_VOLTAGE_AC_RMS, TWO_PI, type TankInput,
 } from '../../src/core';
+
+const math = create(all);
 
 /** Run fn, expect a DesignError, return its field. */
 function fieldOf(fn: () => unknown): string {
@@ -402,5 +406,169 @@ describe('−3 dB edge frequencies', () => {
     expect(Math.abs(a.upperFrequency / (Math.sqrt(f0 ** 2 + (B / 2) ** 2) + B / 2) - 1)).toBeLessThan(1e-9);
     expect(Math.abs((a.lowerFrequency * a.upperFrequency) / f0 ** 2 - 1)).toBeLessThan(1e-9);
     expect(a.upperFrequency - a.lowerFrequency).toBeCloseTo(a.bandwidth, 6);
+  });
+});
+
+describe('very high Q', () => {
+  // A resistor across ideal L and C (parallel), or in series with them: the −3 dB width is exactly
+  // B = 1/(2πRC) (parallel G∥L∥C) or R/(2πL) (series RLC), and the peak |Z| is exactly R, at any Q
+  // (exact circuit algebra, common practice, no published source).
+  const L = 4.7e-6, C = 100e-12, X = Math.sqrt(L / C);
+  for (const q of [1e6, 1e9, 1e12, 1e14, 1e15]) {
+    it(`loaded Q ${q}: bandwidth and peak impedance exact, the peak at f0`, () => {
+      const f0 = 1 / (2 * Math.PI * Math.sqrt(L * C));
+      const p = analyzeTank({ inductance: L, capacitance: C, loadResistance: q * X });
+      expect(rel(p.bandwidth, 1 / (2 * Math.PI * q * X * C))).toBeLessThan(1e-9);
+      expect(rel(p.loadedImpedance, q * X)).toBeLessThan(1e-9);
+      expect(rel(p.loadedResonantFrequency, f0)).toBeLessThan(1e-14);
+      expect(rel(p.loadedQ, q)).toBeLessThan(1e-12);
+      const s = analyzeTank({ mode: 'series', inductance: L, capacitance: C, loadResistance: X / q });
+      expect(rel(s.bandwidth, X / q / (2 * Math.PI * L))).toBeLessThan(1e-9);
+      expect(rel(s.loadedImpedance, X / q)).toBeLessThan(1e-9);
+    });
+  }
+
+  it('a lossy coil at Q 1e13: R_D = Q·X and bandwidth f0/Q to 1e-9', () => {
+    // Terman 1943: R_D = Q ω L; Pozar: B = f0/Q; both exact to O(1/Q²) = 1e-26 here
+    const a = analyzeTank({ inductance: L, capacitance: C, coilQ: 1e13 });
+    expect(rel(a.dynamicResistance, 1e13 * X)).toBeLessThan(1e-9);
+    expect(rel(a.bandwidth, a.naturalFrequency / 1e13)).toBeLessThan(1e-9);
+  });
+});
+
+describe('losses from source to load', () => {
+  // 4.7 µH with 100 pF (f0 = 7.341 MHz, X = √(L/C) = 216.8 Ω), coil Q 115, a 50 Ω source and a 2 kΩ load.
+  const L = 4.7e-6, C = 100e-12, QU = 115, RS = 50, RLOAD = 2000;
+  const tank: TankInput = { inductance: L, capacitance: C, coilQ: QU, sourceResistance: RS, loadResistance: RLOAD };
+
+  /** Transducer gain 4 R_s |V_load/V_s|² / R_load of the circuit at f, with mathjs complex numbers. */
+  function gainAt(f: number): number {
+    const w = 2 * Math.PI * f;
+    const r = (2 * Math.PI * 7.34127e6 * L) / QU; // coil Q 115 at f0 as a series resistance
+    const par = (a: MathComplex | number, b: MathComplex | number) => math.divide(math.multiply(a, b), math.add(a, b)) as MathComplex;
+    const coil = math.complex(r, w * L);
+    const cap = math.complex(0, -1 / (w * C));
+    const zp = par(par(coil, cap), RLOAD);
+    const h = math.divide(zp, math.add(zp, RS)) as MathComplex;
+    return (4 * RS * Number(math.abs(h)) ** 2) / RLOAD;
+  }
+
+  it('50 Ω and 2 kΩ: the insertion-loss rule reads 0.017 dB, the transducer loss is 10.2 dB', () => {
+    // Hand calculation: Q_e = (R_s ∥ R_load)/X = 48.78/216.8 = 0.2250, Q_L = 1/(1/115 + 1/0.2250) = 0.2246,
+    // IL = −20 log10(1 − Q_L/Q_u) = 0.0170 dB. At f0, R_D = Q_u X = 24.93 kΩ, R_p = R_D ∥ 2 kΩ = 1851 Ω,
+    // V_load/V_s = R_p/(R_p + 50) = 0.9737, G_T = 4·50·0.9737²/2000 = 0.0948: 10.23 dB (Pozar, transducer gain).
+    const a = analyzeTank(tank);
+    expect(a.insertionLoss as number).toBeCloseTo(0.017, 3);
+    expect(a.transducerLoss as number).toBeCloseTo(10.2, 1);
+    const rp = 1 / (1 / (QU * Math.sqrt(L / C)) + 1 / RLOAD);
+    expect(Math.abs((a.transducerLoss as number) - -10 * Math.log10((4 * RS * (rp / (rp + RS)) ** 2) / RLOAD))).toBeLessThan(0.01);
+  });
+
+  it('the transducer loss is the least loss of the circuit over frequency (mathjs circuit scan)', () => {
+    // independent library: mathjs 15 complex arithmetic of the same circuit, scanned 2 to 30 MHz
+    let best = 0;
+    for (let i = 0; i <= 28000; i++) best = Math.max(best, gainAt(2e6 + i * 1e3));
+    const a = analyzeTank(tank);
+    expect(Math.abs((a.transducerLoss as number) - -10 * Math.log10(best))).toBeLessThan(1e-4);
+    expect(Math.abs(gainAt(a.loadedResonantFrequency) - best) / best).toBeLessThan(1e-6);
+  });
+
+  it('transducer loss = mismatch loss + dissipative loss', () => {
+    // exact: G_T = (1 − |Γ|²)·P_load/P_in for a source of real impedance (Pozar, ch. 2 and 11)
+    for (const mode of ['parallel', 'series'] as const) {
+      for (const [rs, rl] of [[50, 2000], [3e3, 10e3], [20, 20], [5, 1]]) {
+        const a = analyzeTank({ mode, inductance: L, capacitance: C, coilQ: 150, capacitorQ: 900, coilSelfCapacitance: 4e-12, sourceResistance: rs, loadResistance: rl });
+        expect(Math.abs((a.mismatchLoss as number) + (a.dissipativeLoss as number) - (a.transducerLoss as number))).toBeLessThan(1e-9);
+        expect(a.transducerLoss as number).toBeGreaterThanOrEqual(a.dissipativeLoss as number);
+      }
+    }
+  });
+
+  it('transducerLoss and mismatchLoss by their definitions', () => {
+    // Pozar: a matched source (Z_in = R_s) has no mismatch loss; Γ = 1/3 (Z_in = 2 R_s) gives −10 log10(8/9) = 0.5115 dB
+    expect(mismatchLoss(50, complex(50, 0))).toBe(0);
+    expect(mismatchLoss(50, complex(100, 0))).toBeCloseTo(0.51153, 5);
+    // |Γ|² = |(50 + j50 − 50)/(50 + j50 + 50)|² = 2500/12500 = 0.2: 0.9691 dB
+    expect(mismatchLoss(50, complex(50, 50))).toBeCloseTo(0.96910, 5);
+    // a wire from R_s into an equal load: V_load = V_s/2, no loss
+    expect(transducerLoss(50, 50, 0.5)).toBeCloseTo(0, 12);
+    // 50 Ω straight into 2 kΩ: H = 2000/2050, G_T = 4·50·H²/2000 = 0.0952: 10.21 dB
+    expect(transducerLoss(50, 2000, 2000 / 2050)).toBeCloseTo(-10 * Math.log10((200 * (2000 / 2050) ** 2) / 2000), 12);
+    expect(fieldOf(() => transducerLoss(50, 50, 0.6))).toBe('voltageGain');
+    expect(fieldOf(() => mismatchLoss(50, complex(0, 20)))).toBe('inputImpedance');
+  });
+});
+
+describe('terminations that collapse the tank', () => {
+  const L = 4.7e-6, C = 100e-12, X = Math.sqrt(L / C);
+
+  it('the rule: Q_L < 2, or Q_e < Q_u/20 with Q_L < 10', () => {
+    // the rule of terminations.ts (thresholds chosen there); Q_L from 1/Q_L = 1/Q_u + 1/Q_e (Pozar)
+    expect(terminationsCollapse(115, 0.225)).toBe(true); // Q_L 0.22
+    expect(terminationsCollapse(3, 3)).toBe(true); // Q_L 1.5, though Q_e = Q_u
+    expect(terminationsCollapse(200, 9)).toBe(true); // Q_u/Q_e 22, Q_L 8.6
+    expect(terminationsCollapse(200, 11)).toBe(false); // Q_u/Q_e 18
+    expect(terminationsCollapse(1000, 40)).toBe(false); // Q_u/Q_e 25 but Q_L 38
+    expect(terminationsCollapse(Infinity, 5)).toBe(true); // ideal parts, Q_L 5
+    expect(terminationsCollapse(1.5, Infinity)).toBe(false); // no terminations at all
+  });
+
+  it('50 Ω across a 4.7 µH tank: a validity note with the figures, pointing to a tap or link', () => {
+    const a = analyzeTank({ inductance: L, capacitance: C, coilQ: 115, sourceResistance: 50, loadResistance: 2000 });
+    expect(a.terminationsCollapse).toBe(true);
+    const n = a.notes.find((x) => /collapse/.test(x.message));
+    expect(n?.level).toBe('validity');
+    expect(n?.field).toBe('sourceResistance');
+    expect(n?.message).toMatch(/loaded Q of 0\.225/);
+    expect(n?.message).toMatch(/Q_u = 115/);
+    expect(n?.message).toMatch(/50 Ω source takes 98 %/);
+    expect(n?.message).toMatch(/tap on the coil, a link winding/);
+    expect(n?.message).toMatch(/MHz/);
+  });
+
+  it('a load 20 times heavier than the tank\'s loss, Q_L 4.9: an info note; Q_L 19: none', () => {
+    const heavy = analyzeTank({ inductance: L, capacitance: C, coilQ: 200, loadResistance: 5 * X });
+    expect(heavy.loadedQ).toBeCloseTo(4.88, 2);
+    expect(heavy.terminationsCollapse).toBe(true);
+    const n = heavy.notes.find((x) => /set almost all/.test(x.message));
+    expect(n?.level).toBe('info');
+    expect(n?.field).toBe('loadResistance');
+    const fine = analyzeTank({ inductance: L, capacitance: C, coilQ: 200, loadResistance: 20 * X });
+    expect(fine.terminationsCollapse).toBe(false);
+    expect(fine.notes.some((x) => /tap on the coil/.test(x.message))).toBe(false);
+    expect(analyzeTank({ inductance: L, capacitance: C, coilQ: 200 }).terminationsCollapse).toBe(false);
+  });
+
+  it('series tank: large terminations collapse it, and the note asks for a lower resistance', () => {
+    const a = analyzeTank({ mode: 'series', inductance: L, capacitance: C, coilQ: 150, sourceResistance: 200, loadResistance: 50 });
+    expect(a.terminationsCollapse).toBe(true);
+    const n = a.notes.find((x) => /collapse/.test(x.message));
+    expect(n?.field).toBe('sourceResistance');
+    expect(n?.message).toMatch(/lower resistance/);
+  });
+});
+
+describe('hostile input to the tank', () => {
+  const base: TankInput = { inductance: L, capacitance: C, coilQ: 100 };
+  it('null or odd options give a DesignError, not a TypeError', () => {
+    expect(fieldOf(() => tankImpedance(base, 1e6, null as unknown as { loaded: boolean }))).toBe('options');
+    expect(fieldOf(() => tankImpedance(base, 1e6, { loaded: 'yes' as unknown as boolean }))).toBe('loaded');
+    expect(fieldOf(() => tankNetlist(base, null as unknown as undefined))).toBe('options');
+    expect(fieldOf(() => tankNetlist(base, { title: 5 as unknown as string }))).toBe('title');
+    expect(fieldOf(() => analyzeTank(null as unknown as TankInput))).toBe('tank');
+    expect(fieldOf(() => sweepTank(base, null as unknown as { start: number; stop: number; points: number }))).toBe('sweep');
+    expect(tankImpedance(base, 1e6, undefined).re).toBeGreaterThan(0);
+  });
+
+  it('strings and extreme values name their field, in engineering notation', () => {
+    expect(fieldOf(() => analyzeTank({ ...base, inductance: '4.7e-6' as unknown as number }))).toBe('inductance');
+    const tiny = (() => { try { analyzeTank({ ...base, capacitance: 1e-300 }); } catch (e) { return e as DesignError; } })();
+    expect(tiny?.field).toBe('capacitance');
+    expect(tiny?.message).toMatch(/1e-300 F .* from 1e-24 F to 1e24 F/);
+    expect(fieldOf(() => analyzeTank({ ...base, inductance: 1e300 }))).toBe('inductance');
+    const neg = (() => { try { analyzeTank({ ...base, inductance: -4.7e-6 }); } catch (e) { return e as DesignError; } })();
+    expect(neg?.message).toMatch(/-4\.7 µH/);
+    expect(fieldOf(() => seriesToParallelResistance(1e-300, 1e300))).toBe('reactance');
+    expect(fieldOf(() => combineQ('5' as unknown as number))).toBe('q');
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { analyzeTank, type TankInput } from '../../src/core';
+import { analyzeTank, terminationsCollapse, DesignError, type TankInput } from '../../src/core';
 
 /** Log-uniform double in [lo, hi]. */
 const logUniform = (lo: number, hi: number) =>
@@ -59,6 +59,67 @@ describe('tank properties', () => {
         fc.pre(a.loadedQ >= 10);
         expect(Math.abs((a.bandwidth * a.loadedQ) / a.loadedResonantFrequency - 1)).toBeLessThanOrEqual(1 / a.loadedQ ** 2);
       }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('equal terminations: the insertion-loss rule equals the transducer loss within IL/Q_L² (Q_L ≥ 10)', () => {
+    // The rule −20 log10(1 − Q_L/Q_u) is derived for equal terminations at f0 with the high-Q parallel
+    // equivalents; what it neglects is of order 1/Q_L² (a 20,000-tank random search gave at most 0.3 IL/Q_L²).
+    fc.assert(
+      fc.property(tankArb.filter((t) => t.coilQ >= 30 && (t.capacitorQ ?? Infinity) >= 60), logUniform(12, 1e4), (tank, qe) => {
+        const x = Math.sqrt(tank.inductance / tank.capacitance);
+        const r = tank.mode === 'series' ? x / qe / 2 : 2 * qe * x;
+        const a = analyzeTank({ ...tank, sourceResistance: r, loadResistance: r });
+        fc.pre(a.loadedQ >= 10);
+        const il = a.insertionLoss as number;
+        expect(Math.abs(il - (a.transducerLoss as number))).toBeLessThanOrEqual(il / a.loadedQ ** 2 + 1e-12);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('any terminations: transducer = mismatch + dissipative loss, none negative; the collapse flag follows the rule', () => {
+    // Pozar: G_T = (1 − |Γ|²)·P_load/P_in ≤ 1 for a passive network; the rule is terminationsCollapse's
+    fc.assert(
+      fc.property(tankArb, logUniform(1e-2, 1e4), logUniform(1e-2, 1e4), (tank, qs, ql) => {
+        const x = Math.sqrt(tank.inductance / tank.capacitance);
+        const term = (q: number) => (tank.mode === 'series' ? x / q : x * q);
+        let a;
+        try {
+          a = analyzeTank({ ...tank, sourceResistance: term(qs), loadResistance: term(ql) });
+        } catch (e) {
+          // no clear resonance with so heavy a load: refused with a DesignError
+          expect(e).toBeInstanceOf(DesignError);
+          expect(1 / (1 / qs + 1 / ql)).toBeLessThan(1);
+          return;
+        }
+        const tl = a.transducerLoss as number;
+        expect(a.mismatchLoss as number).toBeGreaterThanOrEqual(0);
+        expect(a.dissipativeLoss as number).toBeGreaterThanOrEqual(0);
+        expect(Math.abs((a.mismatchLoss as number) + (a.dissipativeLoss as number) - tl)).toBeLessThanOrEqual(1e-9 * Math.max(1, tl));
+        expect(a.terminationsCollapse).toBe(terminationsCollapse(a.unloadedQ, a.externalQ));
+        expect(a.notes.some((n) => /tap on the coil/.test(n.message))).toBe(a.terminationsCollapse);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('a resistor with ideal L and C keeps its exact bandwidth at any Q up to 1e15', () => {
+    // exact circuit algebra: G∥L∥C has B = 1/(2πRC), series RLC has B = R/(2πL), whatever the Q
+    fc.assert(
+      fc.property(
+        fc.constantFrom<'parallel' | 'series'>('parallel', 'series'),
+        logUniform(1e-9, 1), logUniform(1e-13, 1e-3), logUniform(1, 1e15),
+        (mode, inductance, capacitance, q) => {
+          const x = Math.sqrt(inductance / capacitance);
+          const r = mode === 'parallel' ? q * x : x / q;
+          const a = analyzeTank({ mode, inductance, capacitance, loadResistance: r });
+          const b = mode === 'parallel' ? 1 / (2 * Math.PI * r * capacitance) : r / (2 * Math.PI * inductance);
+          expect(Math.abs(a.bandwidth / b - 1)).toBeLessThan(1e-9);
+          expect(Math.abs(a.loadedImpedance / r - 1)).toBeLessThan(1e-9);
+        },
+      ),
       { numRuns: 300 },
     );
   });

@@ -23,6 +23,28 @@ interface Measured {
   bandwidth: number;
 }
 
+/**
+ * Transducer gain of the simulated circuit at each point, from the terminated
+ * impedance ngspice writes: parallel, the 1 A Norton drive with R_s across is a
+ * Thévenin source V_s = R_s·1 A, P_av = R_s/8 and P_load = |V(hot)|²/(2 R_load),
+ * so G_T = 4|Z|²/(R_s R_load); series, the 1 V drive gives I = 1/Z through
+ * R_load, so G_T = 4 R_s R_load/|Z|² (Pozar, transducer power gain).
+ */
+function transducerGains(z: number[], tank: TankInput): number[] {
+  const rs = tank.sourceResistance as number;
+  const rl = tank.loadResistance as number;
+  return z.map((m) => (tank.mode === 'series' ? (4 * rs * rl) / (m * m) : (4 * m * m) / (rs * rl)));
+}
+
+/** Largest value of y by a parabola through the best sample and its neighbours. */
+function peakOf(y: number[]): number {
+  let i = 1;
+  for (let j = 1; j < y.length - 1; j++) if (y[j] > y[i]) i = j;
+  const [y0, y1, y2] = [y[i - 1], y[i], y[i + 1]];
+  const p = (0.5 * (y0 - y2)) / (y0 - 2 * y1 + y2);
+  return y1 - 0.25 * (y0 - y2) * p;
+}
+
 /** Run the netlist the core writes and return frequency and |Z| columns. */
 function simulate(name: string, tank: TankInput, start: number, stop: number): { f: number[]; z: number[] } {
   const netlist = tankNetlist(tank, { sweep: { start, stop, points: 4001, spacing: 'linear' }, dataFile: `${name}.data`, title: name });
@@ -107,6 +129,27 @@ describe.runIf(requireTool('ngspice', ngspiceAvailable(), 'apt-get install -y ng
       expect(Math.abs(m.impedance / a.loadedImpedance - 1)).toBeLessThan(0.02);
       // and the rule bandwidth ≈ f/Q_L holds for these Q values (Pozar; O(1/Q²))
       expect(Math.abs((m.bandwidth * a.loadedQ) / m.frequency - 1)).toBeLessThan(0.01);
+    });
+  }
+
+  // Transducer loss from source to load: the 50 Ω / 2 kΩ front end that collapses its tank (demo values),
+  // unequal and equal terminations, parallel and series.
+  const terminated: Array<{ name: string; tank: TankInput }> = [
+    { name: 'front-end-50-2k', tank: { inductance: 4.7e-6, capacitance: 100e-12, coilQ: 115, sourceResistance: 50, loadResistance: 2000 } },
+    { name: 'tapped-3k-10k', tank: { inductance: 4.7e-6, capacitance: 100e-12, coilQ: 150, capacitorQ: 900, coilSelfCapacitance: 4e-12, sourceResistance: 3e3, loadResistance: 10e3 } },
+    cases[0],
+    cases[3],
+    { name: 'series-mismatch', tank: { mode: 'series', inductance: 1e-6, capacitance: 129e-12, coilQ: 250, sourceResistance: 1, loadResistance: 6 } },
+  ];
+  for (const { name, tank } of terminated) {
+    it(`${name}: transducer loss from source to load`, () => {
+      const a = analyzeTank(tank);
+      const f = a.loadedResonantFrequency;
+      const span = Math.min(4 * a.bandwidth, 0.9 * f);
+      const { z } = simulate(`${name}-gt`, tank, f - span, f + span);
+      const simulated = -10 * Math.log10(peakOf(transducerGains(z, tank)));
+      // ngspice AC analysis (independent solver): within 0.0001 dB (agreement seen: 1e-11 dB)
+      expect(Math.abs((a.transducerLoss as number) - simulated)).toBeLessThan(1e-4);
     });
   }
 
