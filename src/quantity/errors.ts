@@ -17,6 +17,10 @@ export type QuantityErrorCode =
   | 'unknown-unit' // letters after the number that are no unit or prefix we know
   | 'wrong-unit' // a unit of another kind (pF in an inductance field)
   | 'ambiguous' // a suffix with two common readings (mf, mHz, 1m5 in a length field)
+  | 'no-unit' // a length without its unit ("20": metres or millimetres?)
+  | 'range' // a range in a single-value field, or a range that is not two values
+  | 'backwards' // a range whose low end is above its high end
+  | 'out-of-range' // a value outside what the field allows (a negative length, 0 turns)
   | 'expression' // a calculation given to the synchronous parser (see `needsExpression`)
   | 'expression-invalid'; // a calculation that could not be worked out
 

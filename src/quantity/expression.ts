@@ -22,7 +22,7 @@
  */
 import type { MathJsInstance, MathNode, Unit } from 'mathjs';
 import { QuantityError } from './errors';
-import { MAX_QUANTITY_LENGTH, commaError, prepareQuantityText, readPlainQuantity, type QuantityReading } from './parse';
+import { MAX_QUANTITY_LENGTH, commaError, looksLikeRange, parseQuantity, prepareQuantityText, readPlainQuantity, type QuantityReading } from './parse';
 import { QUANTITY_UNITS, UNIT_KINDS, describeField, type QuantityUnit } from './units';
 
 import { EXPRESSION_CONSTANTS, EXPRESSION_FUNCTIONS } from './names';
@@ -115,7 +115,8 @@ export function tokenizeExpression(text: string, field: QuantityUnit): Tokenized
         if (!isName) end = SUFFIX.lastIndex;
       }
       const piece = norm.slice(i, end);
-      values.push(readPlainQuantity(piece, field, original.slice(i, end), text));
+      const { value, unit } = readPlainQuantity(piece, field, original.slice(i, end), text);
+      values.push({ value, unit });
       out += ` ${VAR}${values.length - 1} `;
       i = end;
       continue;
@@ -206,6 +207,7 @@ export async function evaluateQuantityExpression(text: string, field: QuantityUn
   if (typeof text === 'string' && text.length > MAX_QUANTITY_LENGTH) {
     throw new QuantityError(text, `This entry is longer than ${MAX_QUANTITY_LENGTH} characters; shorten it.`, 'too-long');
   }
+  if (looksLikeRange(text)) parseQuantity(text, field); // throws the single-value field's range message
   const { source, values } = tokenizeExpression(text, field);
   const { math, parse } = await loadRestrictedMath();
   let result: unknown;
@@ -223,8 +225,10 @@ export async function evaluateQuantityExpression(text: string, field: QuantityUn
 
 function resultInField(result: unknown, field: QuantityUnit, text: string, math: MathJsInstance): number {
   let value: number;
+  let bare = false;
   if (typeof result === 'number') {
     value = result;
+    bare = true;
   } else if (isUnitLike(result)) {
     const u = result;
     const want = math.unit(1, UNIT_KINDS[field].mathName);
@@ -232,6 +236,7 @@ function resultInField(result: unknown, field: QuantityUnit, text: string, math:
       value = u.toNumber(UNIT_KINDS[field].mathName);
     } else if (u.dimensions.every((d) => d === 0)) {
       value = u.value ?? Number.NaN;
+      bare = true;
     } else {
       const kind = QUANTITY_UNITS.find((q) => u.equalBase(math.unit(1, UNIT_KINDS[q].mathName)));
       const gave = kind ? `${UNIT_KINDS[kind].article} ${UNIT_KINDS[kind].noun} (${kind})` : `a value in ${u.formatUnits()}`;
@@ -244,6 +249,13 @@ function resultInField(result: unknown, field: QuantityUnit, text: string, math:
   }
   if (!Number.isFinite(value)) {
     throw new QuantityError(text, 'This calculation gives no finite value (for example a division by zero).', 'not-finite');
+  }
+  if (bare && field === 'm' && value !== 0) {
+    throw new QuantityError(
+      text,
+      `This calculation gives ${Number(value.toPrecision(4))} with no unit, and a length needs one: write the unit on its numbers, e.g. 2*10mm or 10mm + 2mm.`,
+      'no-unit',
+    );
   }
   return value + 0;
 }

@@ -77,3 +77,12 @@ export function formatNumber(value: number, significant = 4): string {
   if (value === 0) return '0';
   return value.toPrecision(figures(significant)).replace('e+', 'e');
 }
+
+/**
+ * Like formatQuantity, without the trailing zeros of the figures: `10 mm`,
+ * `100 pF`, `7.1 MHz`, `4.7 µH`. For text that goes back into a field or a
+ * link, and for bounds and values quoted in sentences.
+ */
+export function formatQuantityCompact(value: number, unit: string, significant = 4): string {
+  return formatQuantity(value, unit, significant).replace(/^(-?\d+)\.(\d*?)0+(?=\D|$)/, (_, i: string, f: string) => (f ? `${i}.${f}` : i));
+}

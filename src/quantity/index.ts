@@ -24,9 +24,16 @@
  *   Ω, ohm, ohms, R; m, metre(s), meter(s);
  *   V; A; W; s. Lowercase h, f (after a prefix: 220pf), v, a, w are accepted.
  *   Older radio spellings: mfd = µF; mmfd, µµF, uuF = pF.
- * - Lengths: a bare number is metres; `m` right after the number means
- *   metres and `mm` millimetres; also cm, in / inch / inches / " (25.4 mm),
- *   mil / mils / thou (0.0254 mm).
+ * - Lengths need their unit: a bare number ("20") is refused with "did you
+ *   mean 20 mm?" (code 'no-unit'), since metres and millimetres are both
+ *   plausible and a guess builds the wrong coil; zero needs no unit. `m` right
+ *   after the number means metres and `mm` millimetres; also cm, in / inch /
+ *   inches / " (25.4 mm), mil / mils / thou (0.0254 mm). A calculation in a
+ *   length field must carry units too (2*10mm, not 2*10).
+ * - Ranges ("10p..365p", "10…365 pF", "5.9–6.2 MHz", "10p to 365p") are read
+ *   by parseQuantityRange → { low, high }; a single-value field refuses them
+ *   with "A range is not allowed here: give one value" (code 'range'); a range
+ *   written high to low is refused (code 'backwards') with the right order.
  * - A unit of another kind is refused, naming both kinds ("pF is a
  *   capacitance; this field needs an inductance in henries (H).").
  * - Refused as ambiguous, with a hint: mHz / mhz / mc and a bare m in a frequency
@@ -51,31 +58,28 @@
  *   (100p + 22pF; R is the ohm, so 2k2 + 4R7 too). Allowed names: pi, e, tau, sqrt, cbrt, abs, exp, log (natural),
  *   log10, sin, cos, tan, atan, min, max, hypot.
  *
+ * Plain numbers (turns, Q, μ′, °C): parsePlainNumber(text, rule, what), one
+ * grammar for typing and for links: optional sign (+, -, U+2212), digits, an
+ * optional point and exponent, and the rule's own unit (°C) may follow. The
+ * rule's range (NumberRange: min, max, exclusive ends, step) is checked with a
+ * sentence that names the field and quotes the text ("Wire temperature must
+ * be between −60 and 200 °C; you typed “250”."); checkRange does the same for
+ * a quantity's SI value.
+ *
  * Rules for writing: see formatQuantity (engineering notation with an SI
  * prefix, `—` for non-finite values, exponent form beyond f…T).
  */
-import { looksLikeExpression, parseQuantity } from './parse';
-import type { QuantityUnit } from './units';
-
 export { QuantityError, QuantityExpressionError, isQuantityError } from './errors';
 export type { QuantityErrorCode } from './errors';
 export type { QuantityUnit } from './units';
 export { QUANTITY_UNITS } from './units';
-export { parseQuantity, looksLikeExpression, MAX_QUANTITY_LENGTH } from './parse';
-export { formatQuantity, formatNumber, NO_VALUE } from './format';
+export { parseQuantity, looksLikeExpression, looksLikeRange, splitRange, MAX_QUANTITY_LENGTH } from './parse';
+export { parseQuantityAsync } from './async';
+export { parseQuantityRange, parseQuantityRangeAsync, type QuantityRange, type QuantityRangeOptions } from './range';
+export {
+  parsePlainNumber, checkRange, rangeProblem, rangeMessage, quoteText, sayBound, POSITIVE, NON_NEGATIVE,
+  type NumberRange, type PlainNumberRule,
+} from './number';
+export { formatQuantity, formatQuantityCompact, formatNumber, NO_VALUE } from './format';
 export { EXPRESSION_CONSTANTS, EXPRESSION_FUNCTIONS } from './names';
 
-/**
- * Reads a plain value or works out a calculation ("2*47p", "100p + 22p",
- * "1/((2*pi*7.1MHz)^2 * 4.7uH)") for a field that needs `unit`; returns SI.
- * Plain values go through parseQuantity and never load mathjs. Rejects with
- * QuantityError like parseQuantity, and for calculations that cannot be
- * worked out or give a result of another kind.
- */
-export async function parseQuantityAsync(text: string, unit: QuantityUnit): Promise<number> {
-  if (typeof text === 'string' && looksLikeExpression(text)) {
-    const { evaluateQuantityExpression } = await import('./expression');
-    return evaluateQuantityExpression(text, unit);
-  }
-  return parseQuantity(text, unit);
-}

@@ -62,6 +62,8 @@ export function looksLikeExpression(text: string): boolean {
 export interface QuantityReading {
   value: number;
   unit: QuantityUnit | null;
+  /** True when nothing followed the number: no unit, no prefix ("20"). */
+  bare?: boolean;
 }
 
 const RKM = new RegExp(`^([+-]?)\\s*(\\d+)([${RKM_MARKERS}RV])(\\d+)(\\s*)(.*)$`, 's');
@@ -138,7 +140,8 @@ export function readPlainQuantity(s: string, field: QuantityUnit, original: stri
     throw new QuantityError(whole, `${numberText}${suffix ? ' ' + suffix : ''} is too small to be a value; check the exponent.`, 'not-finite');
   }
   if (sign === '-') value = -value;
-  return { value: value + 0, unit: reading.unit };
+  const bare = rkm === null && suffix === '';
+  return bare ? { value: value + 0, unit: reading.unit, bare } : { value: value + 0, unit: reading.unit };
 }
 
 function exampleOf(field: QuantityUnit): string {
@@ -186,10 +189,82 @@ export function commaError(text: string): QuantityError {
  */
 export function parseQuantity(text: string, unit: QuantityUnit): number {
   const { s, original } = prepareQuantityText(text);
+  refuseRange(text, s, original);
   if (looksLikeExpression(s)) throw new QuantityExpressionError(text);
   if (s.includes(',')) throw commaError(text);
   const reading = readPlainQuantity(s, unit, original, text);
+  if (unit === 'm' && reading.bare && reading.value !== 0) throw bareLengthError(text, original);
   return requireFieldUnit(reading, unit, text, shownUnitOf(s, original));
+}
+
+/**
+ * A length typed without a unit ("20") is refused: whether it means metres or
+ * millimetres cannot be told, and guessing either way builds a wrong coil.
+ * Zero needs no unit.
+ */
+export function bareLengthError(text: string, shown: string = text.trim()): QuantityError {
+  return new QuantityError(text, `“${shown}” has no unit; did you mean ${shown} mm? A length needs its unit: mm, cm, m, in or mil.`, 'no-unit');
+}
+
+// ---------------------------------------------------------------------------
+// Ranges ("10p..365p", "5.9–6.2 MHz", "10p to 365p"): split here, read in ./range.ts.
+
+/** Separators that always mean a range. */
+const RANGE_DOTS = /\.\.\.?|\u2026/;
+/** Separators that mean a range only with a value on each side: en dash, em dash, the word "to". */
+const RANGE_WORD = /(?<=\S)\s*[\u2013\u2014]\s*(?=\S)|(?<=\S)\s+to\s+(?=\S)/i;
+
+/**
+ * Splits a range into its two ends as typed ("10p..365p" → ["10p", "365p"]),
+ * or returns null when the text is not written as a range. Throws QuantityError
+ * for a range with more than two ends or a missing end.
+ */
+export function splitRange(text: string): [string, string] | null {
+  if (typeof text !== 'string') return null;
+  const t = text.trim();
+  const m = RANGE_DOTS.exec(t) ?? RANGE_WORD.exec(t);
+  if (!m) return null;
+  const low = t.slice(0, m.index).trim();
+  const high = t.slice(m.index + m[0].length).trim();
+  if (low === '' || high === '') {
+    throw new QuantityError(text, `A range needs a value at each end, e.g. 10p..365p; ${quote(t)} lacks one.`, 'range');
+  }
+  if (RANGE_DOTS.test(high) || RANGE_WORD.test(high)) {
+    throw new QuantityError(text, `A range has two ends, e.g. 10p..365p; ${quote(t)} has more.`, 'range');
+  }
+  return [low, high];
+}
+
+/** True when the text is written as a range of two values. */
+export function looksLikeRange(text: string): boolean {
+  if (typeof text !== 'string') return false;
+  return RANGE_DOTS.test(text) || RANGE_WORD.test(text.trim());
+}
+
+const BARE_NUMBER = /^[+\-\u2212]?\s*(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+\-\u2212]?\d+)?$/;
+const NUMBER_THEN_SUFFIX = /^[+\-\u2212]?\s*(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+\-\u2212]?\d+)?(\s*[^\d\s.+\-*/^()].*)$/s;
+
+/**
+ * The low end of a range with the high end's unit when only the high end
+ * has one, as ranges are usually written: "5.9–6.2 MHz" → "5.9 MHz",
+ * "10..365p" → "10p". Any other low end is returned as it is.
+ */
+export function lowEndWithSharedUnit(low: string, high: string): string {
+  if (!BARE_NUMBER.test(low)) return low;
+  const m = NUMBER_THEN_SUFFIX.exec(high);
+  return m ? `${low}${m[1]}` : low;
+}
+
+function quote(t: string): string {
+  return `“${t.length > 24 ? `${t.slice(0, 24)}…` : t}”`;
+}
+
+/** A single-value field refuses a range with a sentence saying so. */
+function refuseRange(text: string, s: string, original: string): void {
+  if (!looksLikeRange(s)) return;
+  const ends = splitRange(original);
+  const example = ends ? `, e.g. ${lowEndWithSharedUnit(ends[0], ends[1])}` : '';
+  throw new QuantityError(text, `A range is not allowed here: give one value${example}.`, 'range');
 }
 
 /** The unit as typed (letters after the number), for messages: "pF", "4R7". */
