@@ -2,23 +2,26 @@
  * Resonance bench: give any two of frequency, inductance and capacitance and
  * get the third, the reactance at resonance, √(L/C), and the E12 capacitors
  * either side of the capacitance with the frequency each gives.
+ *
+ * The bench is its field table (RESONANCE_FIELDS): the link, the fields in
+ * use and where a core error is shown all come from it.
  */
-import { createMemo, createSignal, For, Show } from 'solid-js';
+import { createMemo, For, Show } from 'solid-js';
 import {
-  capacitanceForFrequency, characteristicImpedance, inductanceForFrequency,
-  inductiveReactance, preferredNeighbours, resonantFrequency,
+  capacitanceForFrequency, characteristicImpedance, DesignError, inductanceForFrequency,
+  inductiveReactance, preferredNeighbours, resonantFrequency, type DesignNote,
 } from '../../src/core';
-import { formatQuantity } from '../../src/quantity';
-import { createComputation } from '../kit/compute';
-import { Choice } from '../kit/Choice';
+import { formatQuantity, formatQuantityCompact } from '../../src/quantity';
+import { createBenchState } from '../kit/bench';
+import { createUrlState } from '../kit/createUrlState';
+import { Field } from '../kit/Field';
+import { defineFields, POSITIVE } from '../kit/fields';
+import { formatShift } from '../kit/format';
 import { Formula } from '../kit/Formula';
-import { NoteList } from '../kit/Note';
 import { LinkNotices } from '../kit/LinkNotices';
-import { QuantityField } from '../kit/QuantityField';
-import { createQuantity } from '../kit/quantityState';
+import { NoteList } from '../kit/Note';
 import { ResultRow } from '../kit/ResultRow';
-import { useUrlState } from '../kit/useUrlState';
-import type { UrlSchema } from '../kit/urlState';
+import { Summary, type SummaryItem } from '../kit/Summary';
 
 export type Unknown = 'f' | 'L' | 'C';
 
@@ -30,106 +33,132 @@ export interface ResonanceFormulas {
   impedance: string;
 }
 
-export const RESONANCE_SCHEMA: UrlSchema = {
-  solve: { kind: 'choice', options: ['f', 'L', 'C'], label: 'solve for' },
-  f: { kind: 'quantity', unit: 'Hz', label: 'frequency' },
-  L: { kind: 'quantity', unit: 'H', label: 'inductance' },
-  C: { kind: 'quantity', unit: 'F', label: 'capacitance' },
-};
+/** The bench's spec: what to solve for and the two values given (SI). */
+export interface ResonanceSpec {
+  solve: Unknown;
+  frequency?: number;
+  inductance?: number;
+  capacitance?: number;
+}
 
-const NAMES: Record<Unknown, string> = { f: 'Frequency', L: 'Inductance', C: 'Capacitance' };
-const FIELD_OF: Record<string, Unknown> = { frequency: 'f', inductance: 'L', capacitance: 'C' };
+export const RESONANCE_FIELDS = defineFields([
+  {
+    kind: 'choice', key: 'solve', path: 'solve', label: 'Solve for', default: 'C',
+    options: [['f', 'Frequency'], ['L', 'Inductance'], ['C', 'Capacitance']],
+  },
+  {
+    kind: 'quantity', key: 'f', path: 'frequency', label: 'Frequency', symbol: 'f', unit: 'Hz', default: '7.1 MHz',
+    allowed: POSITIVE, when: { solve: ['L', 'C'] }, hint: 'e.g. 7.1 MHz, 455k, 1.6e6',
+  },
+  {
+    kind: 'quantity', key: 'L', path: 'inductance', label: 'Inductance', symbol: 'L', unit: 'H', default: '4.7 µH',
+    allowed: POSITIVE, when: { solve: ['f', 'C'] }, hint: 'e.g. 4.7 µH, 4u7, 220n',
+  },
+  {
+    kind: 'quantity', key: 'C', path: 'capacitance', label: 'Capacitance', symbol: 'C', unit: 'F', default: '100 pF',
+    allowed: POSITIVE, when: { solve: ['f', 'L'] }, hint: 'e.g. 100 pF, 4p7, 2*47p, 100p + 22p',
+  },
+] as const);
+
+const NAMES: Record<Unknown, string> = { f: 'Resonant frequency', L: 'Inductance to resonate', C: 'Capacitance to resonate' };
+
+export interface ResonanceResult {
+  solvedFor: Unknown;
+  frequency: number;
+  inductance: number;
+  capacitance: number;
+  reactance: number;
+  impedance: number;
+  /** E12 capacitors either side of the capacitance, with the frequency each gives with this L. */
+  neighbours: { capacitance: number; frequency: number; offset: number }[];
+}
+
+function finite(value: number, field: string, what: string): number {
+  if (!Number.isFinite(value) || value === 0) {
+    throw new DesignError(field, `The ${what} for these values is beyond what can be computed; check the units of the values given.`);
+  }
+  return value;
+}
+
+/** Solves the spec with the core; undefined when a value it needs is missing. */
+export function solveResonance(spec: ResonanceSpec): ResonanceResult | undefined {
+  const { solve, frequency: fv, inductance: Lv, capacitance: Cv } = spec;
+  let freq: number, ind: number, cap: number;
+  if (solve === 'f') {
+    if (Lv === undefined || Cv === undefined) return undefined;
+    ind = Lv; cap = Cv; freq = finite(resonantFrequency(ind, cap), 'frequency', 'resonant frequency');
+  } else if (solve === 'L') {
+    if (fv === undefined || Cv === undefined) return undefined;
+    freq = fv; cap = Cv; ind = finite(inductanceForFrequency(freq, cap), 'inductance', 'inductance');
+  } else {
+    if (fv === undefined || Lv === undefined) return undefined;
+    freq = fv; ind = Lv; cap = finite(capacitanceForFrequency(freq, ind), 'capacitance', 'capacitance');
+  }
+  const e12 = preferredNeighbours(cap, 'E12');
+  return {
+    solvedFor: solve,
+    frequency: freq, inductance: ind, capacitance: cap,
+    reactance: inductiveReactance(freq, ind),
+    impedance: characteristicImpedance(ind, cap),
+    neighbours: [...new Set([e12.below, e12.above])].map((c) => {
+      const fc = resonantFrequency(ind, c);
+      return { capacitance: c, frequency: fc, offset: fc / freq - 1 };
+    }),
+  };
+}
+
+/** The answer first: the solved value, and for a capacitance the nearest E12 part. */
+function summaryItems(r: ResonanceResult): SummaryItem[] {
+  const q = formatQuantityCompact;
+  const given = r.solvedFor === 'f'
+    ? `from ${q(r.inductance, 'H')} and ${q(r.capacitance, 'F')}`
+    : r.solvedFor === 'L'
+      ? `with ${q(r.capacitance, 'F')} at ${q(r.frequency, 'Hz')}`
+      : `with ${q(r.inductance, 'H')} at ${q(r.frequency, 'Hz')}`;
+  const value = { f: r.frequency, L: r.inductance, C: r.capacitance }[r.solvedFor];
+  const unit = { f: 'Hz', L: 'H', C: 'F' }[r.solvedFor];
+  const items: SummaryItem[] = [{ id: 'sum-solved', label: NAMES[r.solvedFor], value, unit, detail: given, main: true }];
+  if (r.solvedFor === 'C') {
+    const best = [...r.neighbours].sort((a, b) => Math.abs(a.offset) - Math.abs(b.offset))[0];
+    const shift = formatShift(best.offset);
+    items.push({
+      id: 'sum-e12', label: 'Nearest E12 capacitor', value: best.capacitance, unit: 'F', significant: 2,
+      detail: `gives ${formatQuantity(best.frequency, 'Hz')}${shift ? ` (${shift})` : ''}`,
+    });
+  }
+  return items;
+}
 
 export default function ResonanceBench(props: { formulas: ResonanceFormulas }) {
-  const [solve, setSolve] = createSignal<Unknown>('C');
-  const f = createQuantity('Hz', '7.1 MHz');
-  const L = createQuantity('H', '4.7 µH');
-  const C = createQuantity('F', '100 pF');
-  const inputs = { f, L, C } as const;
-
-  const notices = useUrlState(
-    RESONANCE_SCHEMA,
-    () => ({ solve: solve(), f: f.text(), L: L.text(), C: C.text() }),
-    (v) => {
-      if (v.solve) setSolve(v.solve as Unknown);
-      if (v.f !== undefined) f.setText(v.f);
-      if (v.L !== undefined) L.setText(v.L);
-      if (v.C !== undefined) C.setText(v.C);
-    },
-  );
-
-  const known = (u: Unknown) => u !== solve();
-  const inputsStale = () => (Object.keys(inputs) as Unknown[]).some((u) => known(u) && inputs[u].stale());
-
-  const calc = createComputation(() => {
-    const want = solve();
-    const fv = f.value(), Lv = L.value(), Cv = C.value();
-    if (inputsStale()) return undefined;
-    let freq: number, ind: number, cap: number;
-    if (want === 'f') {
-      if (Lv === undefined || Cv === undefined) return undefined;
-      ind = Lv; cap = Cv; freq = resonantFrequency(ind, cap);
-    } else if (want === 'L') {
-      if (fv === undefined || Cv === undefined) return undefined;
-      freq = fv; cap = Cv; ind = inductanceForFrequency(freq, cap);
-    } else {
-      if (fv === undefined || Lv === undefined) return undefined;
-      freq = fv; ind = Lv; cap = capacitanceForFrequency(freq, ind);
-    }
-    const e12 = preferredNeighbours(cap, 'E12');
-    return {
-      solvedFor: want,
-      frequency: freq, inductance: ind, capacitance: cap,
-      reactance: inductiveReactance(freq, ind),
-      impedance: characteristicImpedance(ind, cap),
-      neighbours: [...new Set([e12.below, e12.above])].map((c) => ({
-        capacitance: c,
-        frequency: resonantFrequency(ind, c),
-        offset: resonantFrequency(ind, c) / freq - 1,
-      })),
-    };
-  }, ['frequency', 'inductance', 'capacitance']);
-
-  const fieldError = (u: Unknown) => {
-    for (const [core, field] of Object.entries(FIELD_OF)) {
-      if (field === u) {
-        const msg = calc.fieldError(core);
-        if (msg) return msg;
-      }
-    }
-    return null;
-  };
+  const bench = createBenchState<ResonanceSpec>(RESONANCE_FIELDS);
+  const notices = createUrlState(bench);
+  const calc = bench.compute((spec) => solveResonance(spec));
   const r = calc.result;
-  const stale = () => calc.stale() || (r() !== undefined && r()!.solvedFor !== solve());
-  const notes = createMemo(() => {
+  const stale = () => calc.stale();
+  const solve = () => bench.choice('solve') as Unknown;
+
+  const notes = createMemo((): DesignNote[] => {
     const res = r();
-    if (!res) return [];
-    const list = [];
-    if (res.frequency < 1e3 || res.frequency > 3e9) {
-      list.push({ level: 'validity' as const, message: `At ${formatQuantity(res.frequency, 'Hz')} this is far outside receiver front-end practice; check the units you typed.` });
-    }
-    return list;
+    if (!res || (res.frequency >= 1e3 && res.frequency <= 3e9)) return [];
+    return [{ level: 'validity', message: `At ${formatQuantity(res.frequency, 'Hz')} this is far outside receiver front-end practice; check the units you typed.` }];
   });
 
   return (
     <div class="tw-bench" data-bench="resonance">
       <LinkNotices notices={notices()} />
       <div class="tw-bench-inputs">
-        <Choice name="solve" legend="Solve for" value={solve()} onChoose={setSolve} options={(['f', 'L', 'C'] as Unknown[]).map((u) => [u, NAMES[u]] as const)} />
-        <Show when={known('f')}>
-          <QuantityField id="f" label="Frequency" symbol="f" q={f} hint="e.g. 7.1 MHz, 455k, 1.6e6" designError={fieldError('f')} />
-        </Show>
-        <Show when={known('L')}>
-          <QuantityField id="L" label="Inductance" symbol="L" q={L} hint="e.g. 4.7 µH, 4u7, 220n" designError={fieldError('L')} />
-        </Show>
-        <Show when={known('C')}>
-          <QuantityField id="C" label="Capacitance" symbol="C" q={C} hint="e.g. 100 pF, 4p7, 2*47p, 100p + 22p" designError={fieldError('C')} />
-        </Show>
-        <Show when={calc.generalError()}>
-          <p class="tw-bench-error" role="alert">{calc.generalError()}</p>
+        <Field bench={bench} name="solve" />
+        <Field bench={bench} name="f" />
+        <Field bench={bench} name="L" />
+        <Field bench={bench} name="C" />
+        <Show when={bench.generalError()}>
+          <p class="tw-bench-error" role="alert">{bench.generalError()}</p>
         </Show>
       </div>
       <div class="tw-bench-results" aria-live="polite">
+        <Show when={r()}>
+          <Summary items={summaryItems(r()!)} stale={stale()} />
+        </Show>
         <Show when={solve() === 'f'}>
           <ResultRow id="out-f" label="Resonant frequency" symbol="f" value={r()?.frequency} unit="Hz" stale={stale()} primary>
             <Formula html={props.formulas.frequency} source="Thomson's formula; Terman 1943" validity="lossless lumped L and C, well below the coil's self-resonance" />
@@ -163,7 +192,7 @@ export default function ResonanceBench(props: { formulas: ResonanceFormulas }) {
                   <tr>
                     <td>{formatQuantity(n.capacitance, 'F', 2)}</td>
                     <td>{formatQuantity(n.frequency, 'Hz')}</td>
-                    <td>{`${n.offset >= 0 ? '+' : '−'}${Math.abs(n.offset * 100).toFixed(2)} %`}</td>
+                    <td>{formatShift(n.offset) ?? 'within 0.1 %'}</td>
                   </tr>
                 )}
               </For>

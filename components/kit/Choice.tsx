@@ -1,8 +1,10 @@
 /**
  * A group of radio buttons under a legend: one choice of a few, reachable
- * with Tab and the arrow keys like any native radio group.
+ * with Tab and the arrow keys like any native radio group. A message from the
+ * core about the choice (a DesignError routed here) is shown under it and
+ * tied to the group.
  */
-import { For } from 'solid-js';
+import { For, Show } from 'solid-js';
 
 export interface ChoiceProps<T extends string> {
   /** Form name of the group; also its URL key, by convention. */
@@ -13,11 +15,18 @@ export interface ChoiceProps<T extends string> {
   /** [value, label] pairs, in display order. */
   options: readonly (readonly [T, string])[];
   class?: string;
+  /** A message from the core about this choice. */
+  message?: string | null;
 }
 
 export function Choice<T extends string>(props: ChoiceProps<T>) {
+  const msgId = () => `${props.name}-msg`;
   return (
-    <fieldset class={`tw-choice${props.class ? ` ${props.class}` : ''}`}>
+    <fieldset
+      class={`tw-choice${props.class ? ` ${props.class}` : ''}`}
+      classList={{ 'tw-field--bad': !!props.message }}
+      aria-describedby={props.message ? msgId() : undefined}
+    >
       <legend>{props.legend}</legend>
       <For each={props.options}>
         {([v, label]) => (
@@ -27,6 +36,9 @@ export function Choice<T extends string>(props: ChoiceProps<T>) {
           </label>
         )}
       </For>
+      <Show when={props.message}>
+        <p class="tw-field-msg" id={msgId()} role="alert">{props.message}</p>
+      </Show>
     </fieldset>
   );
 }

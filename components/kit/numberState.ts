@@ -6,6 +6,7 @@
  * undefined, no message); otherwise it asks for a value.
  */
 import { createSignal, type Accessor } from 'solid-js';
+import { parsePlainNumber, POSITIVE } from '../../src/quantity';
 
 export interface NumberState {
   /** What is in the field, exactly as typed. */
@@ -23,14 +24,9 @@ export interface NumberState {
   setText(text: string): void;
 }
 
-const PLAIN = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
-
-/** Reads a plain number: digits, a decimal point, an optional exponent. */
+/** Reads a plain number by the one grammar (src/quantity/number.ts): digits, a point, an exponent, a sign. */
 export function readPlainNumber(text: string): number {
-  const s = text.trim();
-  if (s.includes(',')) throw new Error(`Use a point for decimals: “${s.replace(',', '.')}”, not “${s}”.`);
-  if (!PLAIN.test(s)) throw new Error(`“${s.length > 24 ? `${s.slice(0, 24)}…` : s}” is not a plain number: type digits, e.g. 150 or 2.5e-4.`);
-  return Number(s);
+  return parsePlainNumber(text);
 }
 
 /**
@@ -52,8 +48,7 @@ export function createNumber(initialText = '', options: { optional?: boolean; wh
     }
     setBlank(false);
     try {
-      const v = readPlainNumber(next);
-      if (!(v > 0) || !Number.isFinite(v)) throw new Error(`${options.what ?? 'The value'} must be a number greater than zero.`);
+      const v = parsePlainNumber(next, POSITIVE, options.what ?? 'The value');
       setLast(v);
       setError(null);
     } catch (e) {

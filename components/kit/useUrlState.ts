@@ -1,9 +1,10 @@
 /**
- * Solid glue for urlState: applies the link's values once after hydration and
- * keeps the address bar in step with the bench (replaceState, debounced, so
- * the Back button is not flooded).
+ * @deprecated Use createUrlState (createUrlState.ts) with a field table's
+ * BenchState. Kept only until the Coil and Tank benches move to field tables;
+ * delete it then.
  */
-import { createEffect, createSignal, on, onCleanup, onMount, type Accessor } from 'solid-js';
+import type { Accessor } from 'solid-js';
+import { createUrlState } from './createUrlState';
 import { decodeState, encodeState, type UrlSchema } from './urlState';
 
 export function useUrlState(
@@ -11,28 +12,12 @@ export function useUrlState(
   current: Accessor<Record<string, string>>,
   apply: (values: Record<string, string>) => void,
 ): Accessor<string[]> {
-  const [notices, setNotices] = createSignal<string[]>([]);
-  const [ready, setReady] = createSignal(false);
-  onMount(() => {
-    const decoded = decodeState(window.location.search, schema);
-    if (Object.keys(decoded.values).length) apply(decoded.values);
-    setNotices(decoded.notices);
-    setReady(true);
+  return createUrlState({
+    readLink(search) {
+      const decoded = decodeState(search, schema);
+      if (Object.keys(decoded.values).length) apply(decoded.values);
+      return decoded;
+    },
+    linkQuery: () => encodeState(current(), schema),
   });
-  let timer: ReturnType<typeof setTimeout> | undefined;
-  createEffect(
-    on([ready, current], ([isReady, values]) => {
-      if (!isReady) return;
-      clearTimeout(timer);
-      timer = setTimeout(() => {
-        const query = encodeState(values, schema);
-        const url = `${window.location.pathname}${query ? `?${query}` : ''}${window.location.hash}`;
-        if (url !== `${window.location.pathname}${window.location.search}${window.location.hash}`) {
-          window.history.replaceState(window.history.state, '', url);
-        }
-      }, 250);
-    }),
-  );
-  onCleanup(() => clearTimeout(timer));
-  return notices;
 }
