@@ -7,7 +7,7 @@
 import { TWO_PI } from './constants';
 import { checkSweepOptions, frequencyGrid, type SweepOptions } from './sweep';
 import { evaluate, findExtremum, kernelOf, scratch } from './tankKernel';
-import { dominantField, qFigures, resolveTank, type TankInput } from './tankModel';
+import { dominantField, qFigures, resolveTank, tankValue, type TankInput } from './tankModel';
 import { DesignError } from './errors';
 import { sayNumber } from './text';
 
@@ -46,7 +46,7 @@ function reusable(into: unknown, n: number): into is TankSweep {
  * `into` (a previous result of the same length) to reuse its arrays (anything
  * else there is ignored).
  * @param tank inputs in SI units
- * @param options start and stop in Hz, points, spacing (see `frequencyGrid`)
+ * @param options start and stop in Hz (within `TANK_VALUE_RANGE`), points, spacing (see `frequencyGrid`)
  * @throws DesignError naming the input at fault
  */
 export function sweepTank(tank: TankInput, options: SweepOptions, into?: TankSweep): TankSweep {
@@ -57,7 +57,9 @@ export function sweepTank(tank: TankInput, options: SweepOptions, into?: TankSwe
   if (!Number.isFinite(vPeak)) {
     throw new DesignError(dominantField(q.shares, true), `The total loss is so high (Q about ${sayNumber(q.loadedQ)}) that the tank hardly resonates: its response has no clear peak. Reduce the loss.`);
   }
-  const n = checkSweepOptions(options).points;
+  const { start, stop, points: n } = checkSweepOptions(options);
+  tankValue('start', start, 'Sweep start', 'Hz');
+  tankValue('stop', stop, 'Sweep stop', 'Hz');
   const out: TankSweep = reusable(into, n)
     ? into
     : { frequency: new Float64Array(n), magnitude: new Float64Array(n), phase: new Float64Array(n), response: new Float64Array(n), peakFrequency: 0 };

@@ -28,4 +28,12 @@ describe('IEC 60063 preferred values', () => {
     expect(() => preferredNeighbours(0)).toThrow(DesignError);
     expect(() => preferredNeighbours(-1)).toThrow(DesignError);
   });
+  it('rejects unknown series and values beyond 1e±305, keeps 1e±300 finite', () => {
+    // IEC 60063:2015 E12: 1e300 sits on the 1.0 step of its decade
+    expect(preferredNeighbours(1e300).below).toBe(1e300);
+    expect(preferredNeighbours(1e-300).above).toBe(1e-300);
+    expect(() => preferredNeighbours(1e307)).toThrow(DesignError);
+    expect(() => preferredNeighbours(1e-6, 'toString' as 'E12')).toThrow(/Unknown series/);
+    expect(() => preferredNeighbours(1e-6, null as unknown as 'E12')).toThrow(DesignError);
+  });
 });

@@ -83,3 +83,29 @@ describe('input checks', () => {
     expect(() => capacitiveReactance(v, 1e-6)).toThrow(DesignError);
   });
 });
+
+describe('extreme values', () => {
+  it('stay finite where the answer is representable, and name a field where it is not', () => {
+    // exact: √(LC) = 1e-300 s, so f = 1/(2π·1e-300 s); the product LC itself would underflow to 0
+    expect(resonantFrequency(1e-300, 1e-300) / (1 / (2 * Math.PI * 1e-300)) - 1).toBeLessThan(1e-14);
+    expect(resonantFrequency(1e300, 1e300) * 2 * Math.PI * 1e300).toBeCloseTo(1, 12);
+    expect(characteristicImpedance(1e300, 1e-300)).toBeCloseTo(1e300, -290);
+    // 1/((2π·1e-300)²·1e-300) is about 1e+898: beyond double precision
+    for (const fn of [() => inductanceForFrequency(1e-300, 1e-300), () => capacitanceForFrequency(1e-300, 1e-300), () => inductiveReactance(1e300, 1e300), () => capacitiveReactance(1e-300, 1e-300)]) {
+      expect(fn).toThrow(DesignError);
+    }
+    try {
+      inductanceForFrequency(1e-150, 1e-300); // 1/((2π·1e-150)²·1e-300) ≈ 2.5e598
+      expect.unreachable();
+    } catch (e) {
+      expect((e as DesignError).field).toBe('capacitance'); // the input farther from 1
+      expect((e as DesignError).message).toMatch(/1e-300 F/);
+    }
+  });
+
+  it('refuse text and missing values with a DesignError, never a TypeError', () => {
+    expect(() => resonantFrequency('4.7e-6' as unknown as number, 1e-10)).toThrow(DesignError);
+    expect(() => characteristicImpedance(undefined as unknown as number, 1e-10)).toThrow(/missing/);
+  });
+});
+
