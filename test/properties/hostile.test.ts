@@ -159,7 +159,7 @@ function badNumbers(value: unknown, path = '', seen = new Set<unknown>()): strin
   seen.add(value);
   if (ArrayBuffer.isView(value)) {
     const out: string[] = [];
-    for (const x of value as unknown as ArrayLike<number>) if (typeof x === 'number' && !Number.isFinite(x)) out.push(`${path}[]=${String(x)}`);
+    for (const x of Array.from(value as unknown as ArrayLike<number>)) if (typeof x === 'number' && !Number.isFinite(x)) out.push(`${path}[]=${String(x)}`);
     return out;
   }
   if (Array.isArray(value)) return value.flatMap((x) => badNumbers(x, `${path}[]`, seen));

@@ -67,7 +67,7 @@ describe('tank properties', () => {
     // The rule −20 log10(1 − Q_L/Q_u) is derived for equal terminations at f0 with the high-Q parallel
     // equivalents; what it neglects is of order 1/Q_L² (a 20,000-tank random search gave at most 0.3 IL/Q_L²).
     fc.assert(
-      fc.property(tankArb.filter((t) => t.coilQ >= 30 && (t.capacitorQ ?? Infinity) >= 60), logUniform(12, 1e4), (tank, qe) => {
+      fc.property(tankArb.filter((t) => (t.coilQ ?? 0) >= 30 && (t.capacitorQ ?? Infinity) >= 60), logUniform(12, 1e4), (tank, qe) => {
         const x = Math.sqrt(tank.inductance / tank.capacitance);
         const r = tank.mode === 'series' ? x / qe / 2 : 2 * qe * x;
         const a = analyzeTank({ ...tank, sourceResistance: r, loadResistance: r });
