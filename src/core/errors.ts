@@ -19,9 +19,9 @@ export class DesignError extends Error {
   readonly field: string;
 
   constructor(field: string, message: string) {
-    super(message);
+    super(String(message));
     this.name = 'DesignError';
-    this.field = field;
+    this.field = String(field);
   }
 }
 
