@@ -12,6 +12,8 @@
  * as A&S and the DLMF "m" notation do, and as @stdlib/math-base-special-ellipk
  * does. K(m) = ∫₀^{π/2} dθ / √(1 − m sin²θ). Valid for 0 ≤ m < 1 (K has a
  * logarithmic singularity at m = 1; E(1) = 1). Accuracy about 1e-15 relative.
+ * Any other argument (m ≥ 1, negative, NaN, not a number) throws a DesignError
+ * with field `m`.
  *
  * The cₙ recurrence cₙ₊₁ = cₙ² / (4 aₙ₊₁) (instead of (aₙ − bₙ)/2) keeps every
  * term relatively accurate, so the difference D(m) = (K − E)/m comes out of the
@@ -19,6 +21,8 @@
  * parameter 1 − m more accurately than m itself (Nagaoka's coefficient for short
  * coils) use the `…FromComplement` forms.
  */
+
+import { DesignError } from './errors';
 
 const HALF_PI = Math.PI / 2;
 
@@ -55,9 +59,10 @@ function agm(m: number, mc: number): AgmResult {
   return { k, d: k * sum };
 }
 
-function checkParameter(m: number, name: string): void {
+/** Throws a DesignError (field `m`) unless 0 ≤ m < 1. */
+function checkParameter(m: unknown, name: string): asserts m is number {
   if (typeof m !== 'number' || !(m >= 0 && m < 1)) {
-    throw new RangeError(`${name}: parameter m = k² must satisfy 0 ≤ m < 1 (got ${m}).`);
+    throw new DesignError('m', `${name}: the parameter m = k² must be a number with 0 ≤ m < 1 (got ${typeof m === 'number' ? String(m) : typeof m}).`);
   }
 }
 
@@ -140,6 +145,13 @@ export function ellipticD(m: number): number {
  * @returns K(m), D(m) = (K − E)/m, and (E − 1)/mc (relatively accurate as mc → 0)
  */
 export function ellipticFromComplement(m: number, mc: number): { k: number; d: number; eMinusOneOverMc: number } {
+  // m may round to 1 when mc is tiny: only mc must stay above zero.
+  if (typeof m !== 'number' || !(m >= 0 && m <= 1)) {
+    throw new DesignError('m', `ellipticFromComplement: the parameter m = k² must satisfy 0 ≤ m ≤ 1 (got ${String(m)}).`);
+  }
+  if (typeof mc !== 'number' || !(mc > 0 && mc <= 1)) {
+    throw new DesignError('mc', `ellipticFromComplement: the complementary parameter must satisfy 0 < 1 − m ≤ 1 (got ${String(mc)}).`);
+  }
   if (mc <= SERIES_BELOW_MC) {
     const s = nearOneSeries(mc);
     const e = 1 + mc * s.eMinusOneOverMc;

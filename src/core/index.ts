@@ -21,13 +21,16 @@ export { ellipticK, ellipticE, ellipticD } from './elliptic';
 export {
   awgDiameter,
   parseAwg,
+  swgDiameter,
+  parseSwg,
+  SWG_DIAMETERS_INCH,
   METRIC_WIRE_DIAMETERS,
   enamelledDiameter,
   resistivityAtTemperature,
   wireResistanceDc,
   wireLengthForCoil,
 } from './wire';
-export type { AwgSize, EnamelGrade, CoilWireInput } from './wire';
+export type { AwgSize, SwgSize, EnamelGrade, CoilWireInput } from './wire';
 export {
   skinDepth,
   wireAcResistanceRatio,
@@ -88,9 +91,24 @@ export {
   solenoidProximityFactor,
   coilAcResistance,
   coilQ,
+  proximityFieldFactor,
+  BUTTERWORTH_LONG_COIL_BIAS,
   PROXIMITY_CLOSE_SPACING,
   PROXIMITY_SHORT_COIL,
 } from './coilLoss';
-export type { ProximityInput, ProximityResult, CoilResistanceInput, CoilResistance, CoilQInput, CoilQ } from './coilLoss';
+export type { ProximityInput, ProximityResult, CoilResistanceInput, CoilResistance, CoilQInput, CoilQ, Uncertainty } from './coilLoss';
 export { multilayerInductance, multilayerTurnsForInductance, multilayerCapacity } from './multilayer';
 export type { MultilayerGeometry, MultilayerInput, MultilayerResult, MultilayerTurnsInput, MultilayerTurnsResult } from './multilayer';
+export { designCoil, COIL_SPEC_FIELDS } from './coil';
+export type {
+  CoilForm,
+  CoilWireSpec,
+  CoilSpecCommon,
+  SolenoidCoilSpec,
+  ToroidCoilSpec,
+  MultilayerCoilSpec,
+  DesignCoilSpec,
+  CoilSpecField,
+  CoilSweep,
+  DesignCoilResult,
+} from './coil';

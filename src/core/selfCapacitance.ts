@@ -25,8 +25,9 @@
  * no overshoot between them.
  */
 import { TWO_PI } from './constants';
-import { DesignError, requireNonNegative, requirePositive } from './errors';
+import { DesignError, requireFiniteResult, requireNonNegative, requireObject, requirePositive } from './errors';
 import { note, type DesignNote } from './notes';
+import { sayNumber, sayQuantity } from './text';
 
 /** One point of Medhurst's table: l/D, H (pF per cm of diameter), and where the value was taken from. */
 export interface MedhurstPoint {
@@ -192,16 +193,19 @@ export interface SelfCapacitanceResult {
  * a 'validity' note is returned outside it.
  */
 export function medhurstSelfCapacitance(diameter: number, length: number): SelfCapacitanceResult {
-  requirePositive('diameter', diameter, 'Coil diameter');
-  requirePositive('length', length, 'Coil length');
+  requirePositive('diameter', diameter, 'Coil diameter', 'm');
+  requirePositive('length', length, 'Coil length', 'm');
   const ratio = length / diameter;
+  if (!(ratio > 0 && Number.isFinite(ratio))) {
+    throw new DesignError('length', 'The length-to-diameter ratio is beyond what can be computed: these values are far outside anything that can be wound.');
+  }
   const { h, extrapolated } = medhurstH(ratio);
   const notes: DesignNote[] = [];
   if (extrapolated) {
     notes.push(
       note(
         'validity',
-        `Length/diameter ${ratio.toPrecision(3)} is outside Medhurst's table (0.1 to 50): the self-capacitance is extrapolated and may be well off.`,
+        `Length/diameter ${sayNumber(ratio)} is outside Medhurst's table (0.1 to 50): the self-capacitance is extrapolated with his fitted form and may be well off (the fitted form alone differs from his table by up to 6 % inside it; outside, nobody has checked).`,
         'length',
       ),
     );
@@ -209,7 +213,7 @@ export function medhurstSelfCapacitance(diameter: number, length: number): SelfC
   notes.push(
     note('info', "Self-capacitance depends on the surroundings: a nearby chassis, screen can or coil former adds to Medhurst's value."),
   );
-  return { selfCapacitance: h * diameter * 1e-10, h, notes };
+  return { selfCapacitance: requireFiniteResult('diameter', h * diameter * 1e-10, 'The self-capacitance'), h, notes };
 }
 
 /**
@@ -231,9 +235,14 @@ export function medhurstCapacitance(diameter: number, length: number): number {
  * resonance is that of a helical line and may differ by tens of percent.
  */
 export function selfResonantFrequency(inductance: number, selfCapacitance: number): number {
-  requirePositive('inductance', inductance, 'Inductance');
-  requirePositive('selfCapacitance', selfCapacitance, 'Self-capacitance');
-  return 1 / (TWO_PI * Math.sqrt(inductance * selfCapacitance));
+  requirePositive('inductance', inductance, 'Inductance', 'H');
+  requirePositive('selfCapacitance', selfCapacitance, 'Self-capacitance', 'F');
+  // 1/(2π √L √C): the product L·C cannot under- or overflow on its own
+  const f = 1 / (TWO_PI * Math.sqrt(inductance) * Math.sqrt(selfCapacitance));
+  if (!(f > 0 && Number.isFinite(f))) {
+    throw new DesignError(inductance < selfCapacitance ? 'inductance' : 'selfCapacitance', 'The self-resonant frequency is beyond what can be computed with these values: they are far outside anything that can be built.');
+  }
+  return f;
 }
 
 export interface ApparentCoilInput {
@@ -268,30 +277,33 @@ export interface ApparentCoil {
  * 'validity' note is returned above 0.5 f_sr (the lumped model fails there),
  * and a DesignError is thrown at or above f_sr.
  */
-export function apparentCoil({ inductance, resistance, selfCapacitance, frequency }: ApparentCoilInput): ApparentCoil {
-  requirePositive('inductance', inductance, 'Inductance');
-  requireNonNegative('resistance', resistance, 'Resistance');
-  requirePositive('selfCapacitance', selfCapacitance, 'Self-capacitance');
-  requirePositive('frequency', frequency, 'Frequency');
+export function apparentCoil(input: ApparentCoilInput): ApparentCoil {
+  requireObject<ApparentCoilInput>('input', input, 'The coil');
+  const { inductance, resistance, selfCapacitance, frequency } = input;
+  requirePositive('inductance', inductance, 'Inductance', 'H');
+  requireNonNegative('resistance', resistance, 'Resistance', 'Ω');
+  requirePositive('selfCapacitance', selfCapacitance, 'Self-capacitance', 'F');
+  requirePositive('frequency', frequency, 'Frequency', 'Hz');
   const fsr = selfResonantFrequency(inductance, selfCapacitance);
   const ratio = frequency / fsr;
   if (ratio >= 1) {
     throw new DesignError(
       'frequency',
-      `${formatHz(frequency)} is at or above the coil's self-resonance (about ${formatHz(fsr)}): there the coil no longer acts as an inductor. Use a lower frequency or a smaller coil.`,
+      `${sayQuantity(frequency, 'Hz')} is at or above the coil's self-resonance (about ${sayQuantity(fsr, 'Hz')}): there the coil no longer acts as an inductor. Use a lower frequency or a smaller coil.`,
     );
   }
   const w = TWO_PI * frequency;
   const k = 1 - ratio * ratio; // 1 − ω²LC
-  const apparentInductance = inductance / k;
-  const apparentResistance = resistance / (k * k);
-  const apparentQ = resistance === 0 ? Infinity : (w * apparentInductance) / apparentResistance;
+  const apparentInductance = requireFiniteResult('frequency', inductance / k, 'The apparent inductance');
+  const apparentResistance = requireFiniteResult('frequency', resistance / k / k, 'The apparent resistance');
+  // Q' = ωL'/R' = (ωL/R)(1 − ω²LC); Infinity only for a lossless coil (R = 0)
+  const apparentQ = resistance === 0 ? Infinity : requireFiniteResult('resistance', ((w * inductance) / resistance) * k, 'The apparent Q');
   const notes: DesignNote[] = [];
   if (ratio > 0.5) {
     notes.push(
       note(
         'validity',
-        `The frequency is ${(ratio * 100).toFixed(0)} % of the self-resonant frequency: above about half of it the lumped self-capacitance model fails (the winding acts as a helical line), so treat the apparent values as rough.`,
+        `The frequency is ${Math.round(ratio * 100)} % of the self-resonant frequency: above about half of it the lumped self-capacitance model fails (the winding acts as a helical line, whose resonances may lie tens of per cent from the lumped estimate), so treat the apparent values as rough.`,
         'frequency',
       ),
     );
@@ -300,11 +312,4 @@ export function apparentCoil({ inductance, resistance, selfCapacitance, frequenc
     notes.push(note('validity', "The coil's Q is below 10: Terman's apparent-value formulas assume a high Q.", 'resistance'));
   }
   return { apparentInductance, apparentResistance, apparentQ, selfResonantFrequency: fsr, frequencyRatio: ratio, notes };
-}
-
-function formatHz(f: number): string {
-  if (f >= 1e9) return `${(f / 1e9).toPrecision(3)} GHz`;
-  if (f >= 1e6) return `${(f / 1e6).toPrecision(3)} MHz`;
-  if (f >= 1e3) return `${(f / 1e3).toPrecision(3)} kHz`;
-  return `${f.toPrecision(3)} Hz`;
 }

@@ -12,9 +12,10 @@
  * a the wire radius and δ = √(ρ/(π f μ0 μr)) the skin depth. The real part is
  * R_ac/R_dc; the imaginary part is ωL_i/R_dc (positive: inductive), and
  * L_i/L_i,dc = Im(Z/R_dc) · 4 (δ/a)², L_i,dc = μ0 μr/(8π) per metre.
- * Limits: 1 + (a/δ)⁴/48 for a ≪ δ, and a/(2δ) + 1/4 + 3δ/(64 a) for a ≫ δ
- * (Ramo, Whinnery & Van Duzer, *Fields and Waves in Communication
- * Electronics*; Terman, *Radio Engineers' Handbook*, 1943, §2).
+ * Limits: 1 + (a/δ)⁴/48 for a ≪ δ, and a/(2δ) + 1/4 + 3δ/(32 a) for a ≫ δ
+ * (the first two terms: Ramo, Whinnery & Van Duzer, *Fields and Waves in
+ * Communication Electronics*; Terman, *Radio Engineers' Handbook*, 1943, §2;
+ * the third from Hankel's expansion below, DLMF 10.17.5).
  *
  * Numerics (no well-kept npm library computes Bessel functions of complex
  * argument, so this is done here):
@@ -29,6 +30,7 @@
  */
 import { COPPER_RESISTIVITY_20C, MU_0 } from './constants';
 import { DesignError, requireNonNegative, requirePositive } from './errors';
+import { sayNumber } from './text';
 
 /** a/δ above which the Hankel expansion replaces the continued fraction. */
 export const SKIN_ASYMPTOTIC_SWITCH = 25;
@@ -41,11 +43,23 @@ export const SKIN_ASYMPTOTIC_SWITCH = 25;
  * @returns δ in metres (copper at 1 MHz: about 66.1 µm)
  */
 export function skinDepth(frequency: number, resistivity: number = COPPER_RESISTIVITY_20C, relativePermeability = 1): number {
-  requirePositive('frequency', frequency, 'Frequency');
+  requirePositive('frequency', frequency, 'Frequency', 'Hz');
   requirePositive('resistivity', resistivity, 'Resistivity');
   requirePositive('relativePermeability', relativePermeability, 'Relative permeability');
-  return Math.sqrt(resistivity / (Math.PI * frequency * MU_0 * relativePermeability));
+  // √(ρ/π/μ0) · 1/√f · 1/√μr: each factor stays finite for any finite positive input
+  const delta = (Math.sqrt(resistivity / (Math.PI * MU_0)) / Math.sqrt(frequency)) / Math.sqrt(relativePermeability);
+  if (!(delta > 0 && Number.isFinite(delta))) {
+    throw new DesignError('frequency', 'The skin depth is beyond what can be computed with these values: they are far outside anything physical.');
+  }
+  return delta;
 }
+
+/**
+ * Below this a/δ the low-frequency series is used: ζ = 1 + (a/δ)⁴/48 + j (a/δ)²/4
+ * (the neglected terms are below 1e-20 relative, so the real part is exactly 1
+ * in doubles on both sides of the switch), so (a/δ)² never underflows.
+ */
+const SMALL_S = 1e-5;
 
 /** A complex number as [re, im]. Local, tiny, allocation-light. */
 type Cx = readonly [number, number];
@@ -71,8 +85,10 @@ function cmul(a: Cx, b: Cx): Cx {
  * Exported for tests and for the coil-loss module; s is dimensionless.
  */
 export function internalImpedanceRatio(s: number): Cx {
-  if (!(s >= 0) || !Number.isFinite(s)) throw new DesignError('s', `The radius-to-skin-depth ratio must be a finite number ≥ 0 (got ${s}).`);
-  if (s === 0) return [1, 0];
+  if (typeof s !== 'number' || !(s >= 0) || !Number.isFinite(s)) {
+    throw new DesignError('s', `The radius-to-skin-depth ratio must be a finite number ≥ 0 (got ${typeof s === 'number' ? sayNumber(s) : typeof s}).`);
+  }
+  if (s < SMALL_S) return [1 + (s * s * s * s) / 48, (s * s) / 4];
   if (s <= SKIN_ASYMPTOTIC_SWITCH) return continuedFraction(s);
   return hankel(s);
 }
@@ -132,6 +148,14 @@ function hankel(s: number): Cx {
   return cmul(pref, cdiv(s0, s1));
 }
 
+/**
+ * L_i/L_i,dc from ζ at s = a/δ: ωL_i,dc/R_dc = s²/4, so the ratio is Im(ζ) · 4/s²
+ * (exactly 1 below the low-frequency switch). For the coil-loss module.
+ */
+export function internalRatioFromZeta(s: number, zeta: Cx): number {
+  return s < SMALL_S ? 1 : (zeta[1] * 4) / (s * s);
+}
+
 export interface WireInternalImpedance {
   /** R_ac / R_dc of the isolated straight wire (≥ 1). */
   resistanceRatio: number;
@@ -158,8 +182,8 @@ export function wireInternalImpedance(
   resistivity: number = COPPER_RESISTIVITY_20C,
   relativePermeability = 1,
 ): WireInternalImpedance {
-  requirePositive('wireDiameter', wireDiameter, 'Wire diameter');
-  requireNonNegative('frequency', frequency, 'Frequency');
+  requirePositive('wireDiameter', wireDiameter, 'Wire diameter', 'm');
+  requireNonNegative('frequency', frequency, 'Frequency', 'Hz');
   requirePositive('resistivity', resistivity, 'Resistivity');
   requirePositive('relativePermeability', relativePermeability, 'Relative permeability');
   if (frequency === 0) {
@@ -167,9 +191,11 @@ export function wireInternalImpedance(
   }
   const delta = skinDepth(frequency, resistivity, relativePermeability);
   const s = wireDiameter / 2 / delta;
+  if (!Number.isFinite(s)) {
+    throw new DesignError('frequency', 'The wire is beyond computing at this frequency: its radius is more than 1e308 skin depths.');
+  }
   const z = internalImpedanceRatio(s);
-  // ωL_i,dc / R_dc = s²/4  →  L_i/L_i,dc = Im(ζ) · 4/s²
-  const internalInductanceRatio = s === 0 ? 1 : (z[1] * 4) / (s * s);
+  const internalInductanceRatio = internalRatioFromZeta(s, z);
   return { resistanceRatio: z[0], internalInductanceRatio, radiusOverSkinDepth: s, skinDepth: delta };
 }
 

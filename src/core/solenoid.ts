@@ -20,16 +20,12 @@
  */
 import { MU_0 } from './constants';
 import { ellipticFromComplement } from './elliptic';
-import { DesignError, requirePositive } from './errors';
+import { DesignError, requireFinite, requireNonNegative, requireObject, requirePositive } from './errors';
 import { note, type DesignNote } from './notes';
+import { sayMm, sayNumber, sayPercent, sayQuantity } from './text';
 
 const FOUR_OVER_THREE_PI = 4 / (3 * Math.PI);
 const METRES_PER_INCH = 0.0254;
-
-/** Millimetres for messages: "0.8 mm", "12.7 mm". */
-function mm(x: number): string {
-  return `${Number((x * 1e3).toPrecision(3))} mm`;
-}
 
 /**
  * Nagaoka's coefficient K for a uniform current sheet (cylindrical, single layer):
@@ -48,13 +44,19 @@ function mm(x: number): string {
  * @returns K, 0 < K < 1; K → 1 for long coils, K ≈ (2l/πd)(ln(4d/l) − ½) for short ones.
  */
 export function nagaokaCoefficient(diameter: number, length: number): number {
-  requirePositive('diameter', diameter, 'Coil diameter');
-  requirePositive('length', length, 'Coil length');
+  requirePositive('diameter', diameter, 'Coil diameter', 'm');
+  requirePositive('length', length, 'Coil length', 'm');
   const h = Math.hypot(diameter, length);
   const k = diameter / h;
   const kc = length / h;
   const m = k * k;
   const mc = kc * kc;
+  if (!(mc > 1e-300)) {
+    // l/d below about 1e-150: only the leading short-coil term is left, computed in logarithms
+    // (it underflows to 0 for l/d below about 1e-300).
+    const lnX = Math.log(length) - Math.log(diameter);
+    return (2 / Math.PI) * Math.exp(lnX) * (Math.log(4) - lnX - 0.5);
+  }
   const { k: bigK, d, eMinusOneOverMc } = ellipticFromComplement(m, mc);
   if (mc <= 0.1) {
     // Short coil: bracket = k'² [D + (E − 1)/k'² + 1/(1 + k)], no cancellation.
@@ -120,8 +122,10 @@ const KM_SERIES_FROM = 20;
  * them (km(1.5) = 0.0700). N ≤ 1 gives 0 (no pairs of turns).
  *
  * @param turns N, any real ≥ 0 (dimensionless)
+ * @throws DesignError (field `turns`) for a negative, non-finite or non-number N
  */
 export function rosaKm(turns: number): number {
+  requireNonNegative('turns', turns, 'Number of turns');
   if (!(turns > 1)) return 0;
   if (turns >= KM_SERIES_FROM) return kmAsymptotic(turns);
   // ln G(N + 1) = ln G(N + 1 + n) − Σ_{j=1}^{n} ln Γ(N + j), with ln G at N + n from
@@ -143,9 +147,13 @@ export function rosaKm(turns: number): number {
  * (including the wire's low-frequency internal inductance, the ¼).
  * @param pitch p, metres (> 0)
  * @param wireDiameter bare wire diameter d, metres (> 0)
+ * @throws DesignError for a pitch or wire diameter that is not a positive finite number
  */
 export function rosaKs(pitch: number, wireDiameter: number): number {
-  return 1.25 - Math.log((2 * pitch) / wireDiameter);
+  requirePositive('pitch', pitch, 'Pitch', 'm');
+  requirePositive('wireDiameter', wireDiameter, 'Wire diameter', 'm');
+  // ln(2p/d) as a difference of logarithms: p/d cannot overflow
+  return 1.25 - Math.LN2 - Math.log(pitch) + Math.log(wireDiameter);
 }
 
 /**
@@ -157,12 +165,8 @@ export function rosaKs(pitch: number, wireDiameter: number): number {
  * @param wireDiameter bare wire diameter d, metres (> 0)
  */
 export function rosaCorrections(turns: number, pitch: number, wireDiameter: number): { ks: number; km: number } {
-  if (typeof turns !== 'number' || !Number.isFinite(turns) || turns < 0) {
-    throw new DesignError('turns', `The number of turns must be a finite number, zero or more (got ${turns}).`);
-  }
-  requirePositive('pitch', pitch, 'Pitch');
-  requirePositive('wireDiameter', wireDiameter, 'Wire diameter');
-  return { ks: rosaKs(pitch, wireDiameter), km: rosaKm(turns) };
+  const km = rosaKm(turns);
+  return { ks: rosaKs(pitch, wireDiameter), km };
 }
 
 // ---------------------------------------------------------------------------
@@ -200,28 +204,27 @@ export interface SolenoidResult {
 }
 
 function validateSolenoidGeometry(diameter: number, pitch: number, wireDiameter: number): void {
-  requirePositive('diameter', diameter, 'Coil diameter');
-  requirePositive('pitch', pitch, 'Pitch');
-  requirePositive('wireDiameter', wireDiameter, 'Wire diameter');
+  requirePositive('diameter', diameter, 'Coil diameter', 'm');
+  requirePositive('pitch', pitch, 'Pitch', 'm');
+  requirePositive('wireDiameter', wireDiameter, 'Wire diameter', 'm');
   if (pitch < wireDiameter) {
     throw new DesignError(
       'pitch',
-      `pitch ${mm(pitch)} is smaller than the wire's ${mm(wireDiameter)} diameter: turns would overlap.`,
+      `pitch ${sayMm(pitch)} is smaller than the wire's ${sayMm(wireDiameter)} diameter: turns would overlap.`,
     );
   }
   if (wireDiameter >= diameter) {
     throw new DesignError(
       'wireDiameter',
-      `The wire's ${mm(wireDiameter)} diameter is not smaller than the ${mm(diameter)} winding diameter (measured wire centre to wire centre): the winding would cross the coil's axis.`,
+      `The wire's ${sayMm(wireDiameter)} diameter is not smaller than the ${sayMm(diameter)} winding diameter (measured wire centre to wire centre): the winding would cross the coil's axis.`,
     );
   }
 }
 
 function validateTurns(turns: number): void {
-  if (typeof turns !== 'number' || Number.isNaN(turns)) throw new DesignError('turns', 'Turns is not a number.');
-  if (!Number.isFinite(turns)) throw new DesignError('turns', 'Turns must be a finite number.');
+  requireFinite('turns', turns, 'Turns');
   if (turns < 1) {
-    throw new DesignError('turns', `A solenoid needs at least one turn (got ${turns}).`);
+    throw new DesignError('turns', `A solenoid needs at least one turn (got ${sayNumber(turns)}).`);
   }
 }
 
@@ -230,11 +233,67 @@ function solenoidCore(diameter: number, turns: number, pitch: number, wireDiamet
   const r = diameter / 2;
   const length = turns * pitch;
   const nagaoka = nagaokaCoefficient(diameter, length);
-  const currentSheetInductance = (nagaoka * MU_0 * Math.PI * r * r * turns * turns) / length;
+  // K μ0 π r² N² / l, grouped as (r N)(r N / l) so that large coils do not overflow early
+  const currentSheetInductance = nagaoka * MU_0 * Math.PI * (r * turns) * ((r * turns) / length);
   const ks = rosaKs(pitch, wireDiameter);
   const km = rosaKm(turns);
   const inductance = currentSheetInductance - MU_0 * r * turns * (ks + km);
   return { r, length, nagaoka, currentSheetInductance, ks, km, inductance };
+}
+
+/**
+ * Refuses a computed inductance that is not a positive finite number: only
+ * inputs far outside anything that can be wound (a coil kilometres wide, a
+ * pitch a billionth of its diameter) get there.
+ */
+function checkInductance(inductance: number, diameter: number, turns: number): number {
+  if (Number.isFinite(inductance) && inductance > 0) return inductance;
+  const field = !Number.isFinite(inductance) ? (turns > diameter ? 'turns' : 'diameter') : 'pitch';
+  throw new DesignError(field, 'The inductance is beyond what can be computed with these values: they are far outside anything that can be wound.');
+}
+
+// ---------------------------------------------------------------------------
+// Maxwell's filament sum, for the size of Rosa's error at wide pitch
+
+/**
+ * Low-frequency inductance of N coaxial circular round-wire loops of radius r
+ * spaced p apart (the turns of a solenoid taken as separate circles): the sum of
+ * each loop's self-inductance μ0 r [(1 + ρ²/8r²) ln(8r/ρ) − 7/4 + ρ²/24r²]
+ * (ρ the wire radius; Rosa 1907, Grover 1946) and Maxwell's mutual inductance
+ * of every pair, M = μ0 r [(2/k − k) K(k²) − (2/k) E(k²)], k² = 4r²/(4r² + z²)
+ * (Maxwell; Grover 1946). Loops more than 64 r apart are left out (their
+ * share is below 1e-4 of the total). Used only to size the error of Rosa's
+ * corrections where the pitch is wide; integer N ≥ 1.
+ */
+function filamentInductance(radius: number, turns: number, pitch: number, wireDiameter: number): number {
+  const rho = wireDiameter / 2;
+  const q = (rho * rho) / (radius * radius);
+  const self = MU_0 * radius * ((1 + q / 8) * Math.log((8 * radius) / rho) - 1.75 + q / 24);
+  let total = turns * self;
+  const farthest = Math.min(turns - 1, Math.ceil((64 * radius) / pitch));
+  for (let s = 1; s <= farthest; s++) {
+    const z = s * pitch;
+    const h = 4 * radius * radius + z * z;
+    const m = (4 * radius * radius) / h;
+    const k = Math.sqrt(m);
+    const { k: bigK, d } = ellipticFromComplement(m, (z * z) / h);
+    // (2/k − k)K − (2/k)E = (2/k)(K − E) − kK = k (2D − K), D = (K − E)/m
+    total += 2 * (turns - s) * MU_0 * radius * k * (2 * d - bigK);
+  }
+  return total;
+}
+
+/**
+ * Relative error of the Rosa-corrected inductance against the filament sum
+ * above (for fractional N, interpolated between the neighbouring whole numbers).
+ */
+function rosaErrorAgainstFilaments(diameter: number, turns: number, pitch: number, wireDiameter: number): number {
+  const errorAt = (n: number) =>
+    solenoidCore(diameter, n, pitch, wireDiameter).inductance / filamentInductance(diameter / 2, n, pitch, wireDiameter) - 1;
+  const lo = Math.floor(turns);
+  if (lo === turns) return errorAt(lo);
+  const t = turns - lo;
+  return (1 - t) * errorAt(lo) + t * errorAt(lo + 1);
 }
 
 /**
@@ -247,8 +306,16 @@ function solenoidCore(diameter: number, turns: number, pitch: number, wireDiamet
  * @returns henries
  */
 export function wheelerSolenoidInductance(radius: number, length: number, turns: number): number {
-  // r_in² N² / (9 r_in + 10 l_in) µH with r_in = r/0.0254 ⇒ 1e-6 r² N² / (0.0254 (9r + 10l)) H
-  return (1e-6 * radius * radius * turns * turns) / (METRES_PER_INCH * (9 * radius + 10 * length));
+  requirePositive('radius', radius, 'Coil radius', 'm');
+  requireNonNegative('length', length, 'Coil length', 'm');
+  requirePositive('turns', turns, 'Turns');
+  // r_in² N² / (9 r_in + 10 l_in) µH with r_in = r/0.0254 ⇒ 1e-6 r² N² / (0.0254 (9r + 10l)) H,
+  // grouped as r · (r/(9r + 10l)) · N² so that only a truly huge coil overflows
+  const l = ((1e-6 / METRES_PER_INCH) * radius * (radius / (9 * radius + 10 * length))) * turns * turns;
+  if (!Number.isFinite(l)) {
+    throw new DesignError(turns > radius ? 'turns' : 'radius', "Wheeler's inductance is beyond what can be computed with these values: they are far outside anything that can be wound.");
+  }
+  return l;
 }
 
 /**
@@ -262,9 +329,11 @@ export function wheelerSolenoidInductance(radius: number, length: number, turns:
  * (l < 0.8 r), when N < 2 (a loop rather than a coil: leads and pitch angle
  * matter), when the pitch exceeds half the coil radius (Rosa's corrections
  * assume p ≪ r: against an exact sum of Maxwell's mutual inductances of
- * circular filaments they are within 0.6 % up to p = r/2, about 2 % at p = r
- * and 4–7 % at p = 2r; beyond about 2r the corrected value even rises with
- * pitch), and when the wire is thick beside the coil (d > r/5:
+ * circular filaments they are within 0.7 % up to p = r/2, about 2 % at p = r
+ * and 4–6 % at p = 2r; beyond that the error grows with pitch, to about
+ * +18–23 % at p = 10 r and +68–73 % at p = 100 r for wire a twentieth of
+ * the radius, more for thicker wire. The note states this coil's own figure
+ * from that filament sum), and when the wire is thick beside the coil (d > r/5:
  * at radio frequencies the current crowds to the inside of the turns).
  * A large pitch-to-wire ratio by itself gets no note: ks then turns negative
  * (the wire's own inductance exceeds its sheet strip's) but the comparison
@@ -274,17 +343,19 @@ export function wheelerSolenoidInductance(radius: number, length: number, turns:
  *   than the wire (turns would overlap), wire not thinner than the coil.
  */
 export function solenoidInductance(input: SolenoidInput): SolenoidResult {
+  requireObject<SolenoidInput>('input', input, 'The coil');
   const { diameter, turns, pitch, wireDiameter } = input;
   validateTurns(turns);
   validateSolenoidGeometry(diameter, pitch, wireDiameter);
   const c = solenoidCore(diameter, turns, pitch, wireDiameter);
+  checkInductance(c.inductance, diameter, turns);
   const notes: DesignNote[] = [];
   const wheelerInductance = wheelerSolenoidInductance(c.r, c.length, turns);
   if (c.length < 0.8 * c.r) {
     notes.push(
       note(
         'validity',
-        `Wheeler's formula is within about 1 % only for coils longer than 0.8 × their radius; this one is ${Number((c.length / c.r).toPrecision(2))} × its radius, so its Wheeler figure is a rough check only (the main result uses Nagaoka's exact coefficient).`,
+        `Wheeler's formula is within about 1 % only for coils longer than 0.8 × their radius; this one is ${sayNumber(c.length / c.r, 2)} × its radius, so its Wheeler figure is a rough check only (the main result uses Nagaoka's exact coefficient).`,
       ),
     );
   }
@@ -298,12 +369,14 @@ export function solenoidInductance(input: SolenoidInput): SolenoidResult {
     );
   }
   if (pitch > 0.5 * c.r) {
+    const error = rosaErrorAgainstFilaments(diameter, turns, pitch, wireDiameter);
+    const thisCoil = `the result is ${sayPercent(Math.abs(error)).slice(1)} ${error >= 0 ? 'above' : 'below'} a sum of Maxwell's formula over its turns taken as separate circular loops`;
     notes.push(
       note(
         'validity',
         pitch > 2 * c.r
-          ? `The pitch (${mm(pitch)}) is more than twice the coil radius (${mm(c.r)}): the turns act as separate loops and Rosa's corrections no longer hold (the result is several per cent high and even rises with pitch). Treat it as an estimate only.`
-          : `The pitch (${mm(pitch)}) is more than half the coil radius (${mm(c.r)}): Rosa's corrections assume turns close together compared with the radius; expect the result to be high by up to about 1 % at a pitch of half the radius, 2 % at the full radius and more beyond.`,
+          ? `The pitch (${sayMm(pitch)}) is more than twice the coil radius (${sayMm(c.r)}): the turns act as separate loops and Rosa's corrections no longer hold. For this coil ${thisCoil}; the error grows with pitch (about +20 % at 10 × the radius and +70 % at 100 × for wire a twentieth of the radius, more for thicker wire), and at such a pitch the turns are no longer near circles either. Treat it as an estimate only.`
+          : `The pitch (${sayMm(pitch)}) is more than half the coil radius (${sayMm(c.r)}): Rosa's corrections assume turns close together compared with the radius. For this coil ${thisCoil} (in general up to about +1 % at a pitch of half the radius, +2 % at the radius and +6 % at twice it).`,
         'pitch',
       ),
     );
@@ -312,7 +385,7 @@ export function solenoidInductance(input: SolenoidInput): SolenoidResult {
     notes.push(
       note(
         'validity',
-        `The wire (${mm(wireDiameter)}) is thick compared with the coil (radius ${mm(c.r)}): at radio frequencies the current crowds to the inside of the turns, so the working diameter is smaller and the inductance noticeably lower than this low-frequency value.`,
+        `The wire (${sayMm(wireDiameter)}) is thick compared with the coil (radius ${sayMm(c.r)}): at radio frequencies the current crowds to the inside of the turns, so the working diameter is smaller and the inductance noticeably lower than this low-frequency value.`,
         'wireDiameter',
       ),
     );
@@ -389,16 +462,20 @@ export interface TurnsForInductanceResult {
  *   or when more than ten million turns would be needed.
  */
 export function turnsForInductance(input: TurnsForInductanceInput): TurnsForInductanceResult {
+  requireObject<TurnsForInductanceInput>('input', input, 'The coil');
   const { inductance: target, diameter, wireDiameter, closeWound, insulatedDiameter } = input;
-  requirePositive('inductance', target, 'Inductance');
-  requirePositive('wireDiameter', wireDiameter, 'Wire diameter');
+  requirePositive('inductance', target, 'Inductance', 'H');
+  requirePositive('wireDiameter', wireDiameter, 'Wire diameter', 'm');
+  if (closeWound !== undefined && typeof closeWound !== 'boolean') {
+    throw new DesignError('closeWound', `Close-wound must be true or false (got ${typeof closeWound === 'string' ? `“${closeWound}”` : typeof closeWound}).`);
+  }
   const notes: DesignNote[] = [];
   if (insulatedDiameter !== undefined) {
-    requirePositive('insulatedDiameter', insulatedDiameter, 'Insulated wire diameter');
+    requirePositive('insulatedDiameter', insulatedDiameter, 'Insulated wire diameter', 'm');
     if (insulatedDiameter < wireDiameter) {
       throw new DesignError(
         'insulatedDiameter',
-        `The ${mm(insulatedDiameter)} diameter over the insulation is smaller than the ${mm(wireDiameter)} bare wire.`,
+        `The ${sayMm(insulatedDiameter)} diameter over the insulation is smaller than the ${sayMm(wireDiameter)} bare wire.`,
       );
     }
   }
@@ -406,29 +483,29 @@ export function turnsForInductance(input: TurnsForInductanceInput): TurnsForIndu
   if (closeWound) {
     pitch = insulatedDiameter ?? wireDiameter;
     if (input.pitch !== undefined && input.pitch !== pitch) {
-      notes.push(note('info', `Close-wound: the pitch is the wire's overall diameter, ${mm(pitch)}; the pitch entered was not used.`, 'pitch'));
+      notes.push(note('info', `Close-wound: the pitch is the wire's overall diameter, ${sayMm(pitch)}; the pitch entered was not used.`, 'pitch'));
     }
   } else {
     if (input.pitch === undefined) {
       throw new DesignError('pitch', 'Give the pitch (turn spacing), or choose close-wound.');
     }
-    pitch = input.pitch;
+    pitch = requirePositive('pitch', input.pitch, 'Pitch', 'm');
     if (insulatedDiameter !== undefined && pitch < insulatedDiameter) {
       throw new DesignError(
         'pitch',
-        `pitch ${mm(pitch)} is smaller than the wire's ${mm(insulatedDiameter)} diameter over its insulation: turns would overlap.`,
+        `pitch ${sayMm(pitch)} is smaller than the wire's ${sayMm(insulatedDiameter)} diameter over its insulation: turns would overlap.`,
       );
     }
   }
   validateSolenoidGeometry(diameter, pitch, wireDiameter);
 
   const lOf = (n: number) => solenoidCore(diameter, n, pitch, wireDiameter).inductance;
-  const l1 = lOf(1);
+  const l1 = checkInductance(lOf(1), diameter, 1);
   // (a target within rounding of one turn's inductance is one turn)
   if (target < l1 * (1 - 1e-12)) {
     throw new DesignError(
       'inductance',
-      `${formatHenries(target)} is less than a single turn of this diameter and wire gives (${formatHenries(l1)}): use a smaller diameter or another kind of inductor.`,
+      `${sayQuantity(target, 'H')} is less than a single turn of this diameter and wire gives (${sayQuantity(l1, 'H')}): use a smaller diameter or another kind of inductor.`,
     );
   }
   // Bracket by doubling.
@@ -443,7 +520,7 @@ export function turnsForInductance(input: TurnsForInductanceInput): TurnsForIndu
     if (hi > 1e7) {
       throw new DesignError(
         'inductance',
-        `${formatHenries(target)} would need more than ten million turns on this diameter: use a larger diameter, a multilayer winding or a magnetic core.`,
+        `${sayQuantity(target, 'H')} would need more than ten million turns on this diameter: use a larger diameter, a multilayer winding or a magnetic core.`,
       );
     }
     fhi = lOf(hi) - target;
@@ -492,18 +569,4 @@ function solveMonotone(g: (n: number) => number, target: number, lo: number, flo
     if (hi - lo <= 1e-12 * hi) break;
   }
   return (lo * fhi - hi * flo) / (fhi - flo);
-}
-
-/** Henries for messages, in the unit a technician would use. */
-function formatHenries(h: number): string {
-  const units: [number, string][] = [
-    [1, 'H'],
-    [1e-3, 'mH'],
-    [1e-6, 'µH'],
-    [1e-9, 'nH'],
-  ];
-  for (const [scale, unit] of units) {
-    if (h >= scale) return `${Number((h / scale).toPrecision(3))} ${unit}`;
-  }
-  return `${Number((h / 1e-12).toPrecision(3))} pH`;
 }

@@ -22,8 +22,9 @@
  * "250 nH" entered as AL becomes 250e-9 here.
  */
 import { MU_0, TWO_PI } from './constants';
-import { DesignError, requireNonNegative, requirePositive } from './errors';
+import { DesignError, requireFiniteResult, requireNonNegative, requireObject, requirePositive } from './errors';
 import { note, type DesignNote } from './notes';
+import { sayMm, sayNumber } from './text';
 
 
 export interface ToroidInput {
@@ -35,8 +36,13 @@ export interface ToroidInput {
   innerDiameter: number;
   /** Core height (axial thickness) h, metres. */
   height: number;
-  /** Relative permeability μr (real part μ' of the core's initial permeability; 1 for an air or plastic former). */
-  relativePermeability: number;
+  /**
+   * Relative permeability μr (real part μ' of the core's initial permeability; 1 for an air or
+   * plastic former). Needed unless `al` is given; with `al` it only serves the notes.
+   */
+  relativePermeability?: number;
+  /** Inductance factor AL of the core, henries per turn² (a maker's or a measured figure); when given it sets L = AL N². */
+  al?: number;
 }
 
 export interface ToroidResult {
@@ -53,31 +59,63 @@ export interface ToroidResult {
 
 type ToroidCore = Omit<ToroidInput, 'turns'>;
 
-function validateCore(core: ToroidCore): void {
-  requirePositive('outerDiameter', core.outerDiameter, 'Outer diameter');
-  requirePositive('innerDiameter', core.innerDiameter, 'Inner diameter');
-  requirePositive('height', core.height, 'Core height');
-  requirePositive('relativePermeability', core.relativePermeability, 'Relative permeability');
-  if (core.innerDiameter >= core.outerDiameter) {
+/** Checks the core's dimensions (OD, ID, height; ID < OD). */
+function validateDimensions(outerDiameter: number, innerDiameter: number, height: number): void {
+  requirePositive('outerDiameter', outerDiameter, 'Outer diameter', 'm');
+  requirePositive('innerDiameter', innerDiameter, 'Inner diameter', 'm');
+  requirePositive('height', height, 'Core height', 'm');
+  if (innerDiameter >= outerDiameter) {
     throw new DesignError(
       'innerDiameter',
-      `The inner diameter (${mmText(core.innerDiameter)}) must be smaller than the outer diameter (${mmText(core.outerDiameter)}).`,
+      `The inner diameter (${sayMm(innerDiameter)}) must be smaller than the outer diameter (${sayMm(outerDiameter)}).`,
     );
   }
 }
 
-function mmText(x: number): string {
-  return `${Number((x * 1e3).toPrecision(3))} mm`;
+/** Checks the core and returns its AL: the given one, or μ0 μr h ln(OD/ID)/(2π) from the dimensions. */
+function validateCore(core: ToroidCore): number {
+  validateDimensions(core.outerDiameter, core.innerDiameter, core.height);
+  if (core.relativePermeability !== undefined) requirePositive('relativePermeability', core.relativePermeability, 'Relative permeability');
+  if (core.al !== undefined) return requirePositive('al', core.al, 'AL', 'H');
+  if (core.relativePermeability === undefined) {
+    throw new DesignError('relativePermeability', "Give the core's relative permeability μ′, or its AL.");
+  }
+  return coreAl(core.outerDiameter, core.innerDiameter, core.height, core.relativePermeability);
+}
+
+/** ln(OD/ID) as a difference of logarithms (no overflow of the ratio). */
+function logRatio(core: Pick<ToroidCore, 'outerDiameter' | 'innerDiameter'>): number {
+  return Math.log(core.outerDiameter) - Math.log(core.innerDiameter);
 }
 
 /** AL of a rectangular-section toroid: μ0 μr h ln(OD/ID) / (2π), H per turn². */
-function coreAl(core: ToroidCore): number {
-  return (MU_0 * core.relativePermeability * core.height * Math.log(core.outerDiameter / core.innerDiameter)) / TWO_PI;
+function coreAl(outerDiameter: number, innerDiameter: number, height: number, relativePermeability: number): number {
+  const al = (MU_0 / TWO_PI) * relativePermeability * height * logRatio({ outerDiameter, innerDiameter });
+  if (!(al > 0 && Number.isFinite(al))) {
+    throw new DesignError(relativePermeability > height ? 'relativePermeability' : 'height', 'AL is beyond what can be computed with these values: they are far outside any real core.');
+  }
+  return al;
+}
+
+/**
+ * Effective magnetic path length le and area Ae of a rectangular-section ring
+ * (IEC 60205 core factors): le = 2π ln(OD/ID)/(2/ID − 2/OD), Ae = h ln²(OD/ID)/(2/ID − 2/OD).
+ * Depends on the dimensions only, not on the permeability.
+ */
+function coreFactors(outerDiameter: number, innerDiameter: number, height: number): { effectivePathLength: number; effectiveArea: number } {
+  const ln = logRatio({ outerDiameter, innerDiameter });
+  // 2/ID − 2/OD = 2 (OD − ID)/(ID · OD), grouped so that neither term overflows
+  const inverseRadii = ((2 / innerDiameter) * (outerDiameter - innerDiameter)) / outerDiameter;
+  return {
+    effectivePathLength: requireFiniteResult('innerDiameter', (TWO_PI * ln) / inverseRadii, 'The magnetic path length'),
+    effectiveArea: requireFiniteResult('height', (height * ln * (ln / inverseRadii)), 'The effective area'),
+  };
 }
 
 function coreNotes(core: ToroidCore, turns: number): DesignNote[] {
   const notes: DesignNote[] = [];
-  if (core.relativePermeability > 1.5) {
+  const mu = core.relativePermeability;
+  if (core.al === undefined && mu !== undefined && mu > 1.5) {
     notes.push(
       note(
         'info',
@@ -89,12 +127,12 @@ function coreNotes(core: ToroidCore, turns: number): DesignNote[] {
   if (!Number.isInteger(turns)) {
     notes.push(note('validity', 'On a toroid every pass through the hole is one turn; a fraction of a turn does not exist.', 'turns'));
   }
-  if (core.relativePermeability < 10 && turns < 10) {
+  if (mu !== undefined && mu < 10 && turns < 10) {
     // our threshold: with little permeability and few turns the flux outside the core is no longer negligible
     notes.push(
       note(
         'validity',
-        'With few turns on a low-permeability core much of the flux leaks round the turns, and the leads add their own inductance: expect the real coil to differ by several per cent.',
+        'With few turns on a low-permeability core much of the flux leaks round the turns, and the leads add their own inductance: the real coil may differ from this figure by several per cent or more (the core does not estimate by how much; measure it).',
         'turns',
       ),
     );
@@ -105,24 +143,23 @@ function coreNotes(core: ToroidCore, turns: number): DesignNote[] {
 /**
  * Inductance of a toroid with rectangular cross-section:
  * L = μ0 μr N² h ln(OD/ID) / (2π) (Grover 1946; Snelling 1988), exact for an even winding
- * with all the flux in the core. le = 2π ln(OD/ID)/(2/ID − 2/OD), Ae = h ln²(OD/ID)/(2/ID − 2/OD) (IEC 60205).
+ * with all the flux in the core; or L = AL N² when the core's AL is given.
+ * le = 2π ln(OD/ID)/(2/ID − 2/OD), Ae = h ln²(OD/ID)/(2/ID − 2/OD) (IEC 60205), from the dimensions.
  * @param input.turns N (> 0)
  * @param input.outerDiameter OD, metres
  * @param input.innerDiameter ID, metres (< OD)
  * @param input.height h, metres
- * @param input.relativePermeability μr (> 0; μ' of the core material)
+ * @param input.relativePermeability μr (> 0; μ' of the core material); needed unless `al` is given
+ * @param input.al AL in henries per turn² (optional; overrides the permeability for L)
  */
 export function toroidInductance(input: ToroidInput): ToroidResult {
+  requireObject<ToroidInput>('input', input, 'The toroid');
   requirePositive('turns', input.turns, 'Turns');
-  validateCore(input);
-  const al = coreAl(input);
-  const ln = Math.log(input.outerDiameter / input.innerDiameter);
-  const inverseRadii = 2 / input.innerDiameter - 2 / input.outerDiameter;
+  const al = validateCore(input);
   return {
-    inductance: al * input.turns * input.turns,
+    inductance: requireFiniteResult('turns', al * input.turns * input.turns, 'The inductance'),
     al,
-    effectivePathLength: (TWO_PI * ln) / inverseRadii,
-    effectiveArea: (input.height * ln * ln) / inverseRadii,
+    ...coreFactors(input.outerDiameter, input.innerDiameter, input.height),
     notes: coreNotes(input, input.turns),
   };
 }
@@ -146,27 +183,27 @@ export interface ToroidTurnsResult {
 
 /**
  * Turns on a rectangular-section toroid for a wanted inductance: N = √(L / AL),
- * AL = μ0 μr h ln(OD/ID) / (2π). Practical turns: the nearest whole turn
+ * AL = μ0 μr h ln(OD/ID) / (2π) or as given. Practical turns: the nearest whole turn
  * (a toroid has no half turns), at least one.
  * @param input.inductance L, henries (> 0); other fields as `toroidInductance`
  */
 export function toroidTurnsForInductance(input: ToroidTurnsInput): ToroidTurnsResult {
-  requirePositive('inductance', input.inductance, 'Inductance');
-  validateCore(input);
-  const al = coreAl(input);
-  const turns = Math.sqrt(input.inductance / al);
+  requireObject<ToroidTurnsInput>('input', input, 'The toroid');
+  requirePositive('inductance', input.inductance, 'Inductance', 'H');
+  const al = validateCore(input);
+  const turns = requireFiniteResult('inductance', Math.sqrt(input.inductance) / Math.sqrt(al), 'The number of turns');
   const practicalTurns = Math.max(1, Math.round(turns));
   const notes = coreNotes(input, practicalTurns);
   if (turns < 0.75) {
     notes.push(
       note(
         'validity',
-        `Even one turn gives more than the wanted inductance (${Number((turns * turns).toPrecision(2))} of it would be needed): use a smaller core or one of lower permeability.`,
+        `Even one turn gives more than the wanted inductance (${sayNumber(turns * turns, 2)} of a turn's worth would be needed): use a smaller core or one of lower permeability.`,
         'inductance',
       ),
     );
   }
-  return { turns, practicalTurns, practicalInductance: al * practicalTurns * practicalTurns, al, notes };
+  return { turns, practicalTurns, practicalInductance: requireFiniteResult('inductance', al * practicalTurns * practicalTurns, 'The inductance'), al, notes };
 }
 
 /**
@@ -176,9 +213,9 @@ export function toroidTurnsForInductance(input: ToroidTurnsInput): ToroidTurnsRe
  * @returns henries
  */
 export function inductanceFromAl(al: number, turns: number): number {
-  requirePositive('al', al, 'AL');
+  requirePositive('al', al, 'AL', 'H');
   requirePositive('turns', turns, 'Turns');
-  return al * turns * turns;
+  return requireFiniteResult('turns', al * turns * turns, 'The inductance');
 }
 
 /**
@@ -187,9 +224,9 @@ export function inductanceFromAl(al: number, turns: number): number {
  * @param inductance L, henries (> 0)
  */
 export function turnsFromAl(al: number, inductance: number): number {
-  requirePositive('al', al, 'AL');
-  requirePositive('inductance', inductance, 'Inductance');
-  return Math.sqrt(inductance / al);
+  requirePositive('al', al, 'AL', 'H');
+  requirePositive('inductance', inductance, 'Inductance', 'H');
+  return requireFiniteResult('al', Math.sqrt(inductance) / Math.sqrt(al), 'The number of turns');
 }
 
 /**
@@ -203,19 +240,23 @@ export function turnsFromAl(al: number, inductance: number): number {
 export function toroidCoreQ(muReal: number, muImag: number, windingQ?: number): number {
   requirePositive('muReal', muReal, "Permeability μ'");
   requireNonNegative('muImag', muImag, "Loss permeability μ''");
-  const coreQ = muImag === 0 ? Number.POSITIVE_INFINITY : muReal / muImag;
+  const coreQ = muImag === 0 ? Number.POSITIVE_INFINITY : requireFiniteResult('muImag', muReal / muImag, 'The core Q');
   if (windingQ === undefined) return coreQ;
   requirePositive('windingQ', windingQ, 'Winding Q');
   return 1 / (1 / coreQ + 1 / windingQ);
 }
 
 export interface ToroidWindingInput {
+  /** Number of turns (> 0). */
   turns: number;
+  /** Core outer diameter OD, metres. */
   outerDiameter: number;
+  /** Core inner diameter ID, metres (< OD). */
   innerDiameter: number;
+  /** Core height h, metres. */
   height: number;
-  /** Overall wire diameter, insulation included (m). */
-  wireDiameter: number;
+  /** Overall wire diameter, insulation included (m); for bare wire, the bare diameter. */
+  insulatedDiameter: number;
   /** Length of each of the two leads (m); default 0. */
   leadLength?: number;
 }
@@ -237,27 +278,24 @@ export interface ToroidWinding {
  *   turns per layer = ⌊π (ID − d) / d⌋      (wire centres on a circle of diameter ID − d)
  * Geometry only (common practice, no published source); real windings need a
  * little more wire for tension and spread.
- * @param input turns, core OD, ID, height and overall wire diameter in metres
+ * @param input turns, core OD, ID, height and the wire's overall (insulated) diameter, in metres
  */
 export function toroidWinding(input: ToroidWindingInput): ToroidWinding {
-  const { turns, outerDiameter, innerDiameter, height, wireDiameter } = input;
+  requireObject<ToroidWindingInput>('input', input, 'The winding');
+  const { turns, outerDiameter, innerDiameter, height, insulatedDiameter } = input;
   requirePositive('turns', turns, 'The number of turns');
-  requirePositive('outerDiameter', outerDiameter, 'The outer diameter');
-  requirePositive('innerDiameter', innerDiameter, 'The inner diameter');
-  requirePositive('height', height, 'The core height');
-  requirePositive('wireDiameter', wireDiameter, 'The wire diameter');
-  const leadLength = requireNonNegative('leadLength', input.leadLength ?? 0, 'The lead length');
-  if (innerDiameter >= outerDiameter) {
-    throw new DesignError('innerDiameter', 'The inner diameter must be smaller than the outer diameter.');
+  validateDimensions(outerDiameter, innerDiameter, height);
+  requirePositive('insulatedDiameter', insulatedDiameter, 'The wire’s overall diameter', 'm');
+  const leadLength = requireNonNegative('leadLength', input.leadLength ?? 0, 'The lead length', 'm');
+  if (insulatedDiameter >= innerDiameter) {
+    throw new DesignError('insulatedDiameter', `The wire (${sayMm(insulatedDiameter)} overall) is as thick as the core’s ${sayMm(innerDiameter)} hole: it cannot be wound through it.`);
   }
-  if (wireDiameter >= innerDiameter) {
-    throw new DesignError('wireDiameter', 'The wire is as thick as the core’s hole: it cannot be wound through it.');
-  }
-  const lengthPerTurn = 2 * height + (outerDiameter - innerDiameter) + 4 * wireDiameter;
-  const turnsPerLayer = Math.floor((Math.PI * (innerDiameter - wireDiameter)) / wireDiameter);
+  const lengthPerTurn = requireFiniteResult('height', 2 * height + (outerDiameter - innerDiameter) + 4 * insulatedDiameter, 'The wire per turn');
+  const turnsPerLayer = requireFiniteResult('insulatedDiameter', Math.floor(Math.PI * (innerDiameter / insulatedDiameter - 1)), 'The turns per layer');
   const notes: DesignNote[] = [];
   if (turns > turnsPerLayer) {
-    notes.push(note('validity', `${turns} turns do not fit in one layer round the hole (about ${turnsPerLayer} do): use thinner wire or a bigger core, or expect a second layer, more self-capacitance and a lower Q.`, 'innerDiameter'));
+    notes.push(note('validity', `${sayNumber(turns, 6)} turns do not fit in one layer round the hole (about ${sayNumber(turnsPerLayer, 6)} do): use thinner wire or a bigger core, or expect a second layer, more self-capacitance and a lower Q.`, 'innerDiameter'));
   }
-  return { lengthPerTurn, wireLength: turns * lengthPerTurn + 2 * leadLength, turnsPerLayer, notes };
+  const wireLength = requireFiniteResult('turns', turns * lengthPerTurn + 2 * leadLength, 'The wire length');
+  return { lengthPerTurn, wireLength, turnsPerLayer, notes };
 }

@@ -7,6 +7,11 @@
  *   Wires Used as Electrical Conductors*): d = 0.005 in × 92^((36 − n)/39),
  *   i.e. 0.127 mm × 92^((36 − n)/39); gauge 0000 counts as n = −3, 000 as −2,
  *   00 as −1. AWG 36 is 0.127 mm and 0000 is 0.46 in exactly by definition.
+ * - Imperial Standard Wire Gauge (SWG), fixed by Order in Council in 1883 and
+ *   later given as BS 3737:1964 (now withdrawn): a table of diameters in
+ *   thousandths of an inch, 7/0 = 0.500 in to 50 = 0.001 in. The diameters are
+ *   defined by the table itself (no formula). Values here from memory; they
+ *   agree with the table as widely reproduced (see `SWG_DIAMETERS_INCH`).
  * - Metric nominal bare diameters: the R20 preferred-number steps of ISO 3 as
  *   used for the nominal conductor diameters of IEC 60317-0-1 — common
  *   practice, list recalled from memory and not checked against the standard.
@@ -19,7 +24,7 @@
  *   for copper*).
  */
 import { COPPER_RESISTIVITY_20C, COPPER_TEMPERATURE_COEFFICIENT } from './constants';
-import { DesignError, requireNonNegative, requirePositive } from './errors';
+import { DesignError, requireFinite, requireFiniteResult, requireNonNegative, requireObject, requirePositive } from './errors';
 
 /** An AWG size: an integer −3 … 40 (−3 = 0000) or one of the usual spellings ("0000", "4/0", "22", "AWG 22"). */
 export type AwgSize = number | string;
@@ -37,19 +42,33 @@ const AWG_ZEROS: Readonly<Record<string, number>> = {
  * Accepts integers −3 … 40 and strings such as "0000", "4/0", "00", "22", "AWG 22", "22 AWG".
  */
 export function parseAwg(gauge: AwgSize): number {
+  return parseGauge(gauge, 'AWG', (text) => (Object.prototype.hasOwnProperty.call(AWG_ZEROS, text) ? AWG_ZEROS[text] : undefined), -3, 40, 'a number from 0 to 40, or 00, 000, 0000 (or 2/0, 3/0, 4/0)', '0000 to 40');
+}
+
+/**
+ * Reads a gauge of either system: a number as it is, or text with the system's
+ * name or "#" around it; `special` reads the system's zero sizes ("4/0", "000").
+ * @throws DesignError (field `gauge`) for anything not a whole gauge in [min, max]
+ */
+function parseGauge(
+  gauge: unknown, system: 'AWG' | 'SWG', special: (text: string) => number | undefined,
+  min: number, max: number, spelling: string, range: string,
+): number {
   let n: number;
   if (typeof gauge === 'number') {
     n = gauge;
   } else if (typeof gauge === 'string') {
-    const text = gauge.trim().replace(/^awg\s*#?\s*/i, '').replace(/\s*awg$/i, '').replace(/^#\s*/, '');
-    if (text in AWG_ZEROS) n = AWG_ZEROS[text];
+    const name = system.toLowerCase();
+    const text = gauge.trim().replace(new RegExp(`^${name}\\s*#?\\s*`, 'i'), '').replace(new RegExp(`\\s*${name}$`, 'i'), '').replace(/^#\s*/, '');
+    const zero = special(text);
+    if (zero !== undefined) n = zero;
     else if (/^\d{1,2}$/.test(text)) n = Number(text);
-    else throw new DesignError('gauge', `"${gauge}" is not an AWG size: write a number from 0 to 40, or 00, 000, 0000 (or 2/0, 3/0, 4/0).`);
+    else throw new DesignError('gauge', `“${gauge.length > 20 ? `${gauge.slice(0, 20)}…` : gauge}” is not an ${system} size: write ${spelling}.`);
   } else {
-    throw new DesignError('gauge', 'The wire gauge is missing.');
+    throw new DesignError('gauge', gauge === undefined ? 'The wire gauge is missing.' : `The wire gauge must be a number or text such as "22", not ${gauge === null ? 'empty' : `a ${typeof gauge}`}.`);
   }
-  if (!Number.isInteger(n) || n < -3 || n > 40) {
-    throw new DesignError('gauge', `AWG ${String(gauge)} is outside the table: use whole gauges from 0000 to 40.`);
+  if (!Number.isInteger(n) || n < min || n > max) {
+    throw new DesignError('gauge', `${system} ${String(gauge)} is outside the table: use whole gauges from ${range}.`);
   }
   return n;
 }
@@ -62,6 +81,51 @@ export function parseAwg(gauge: AwgSize): number {
 export function awgDiameter(gauge: AwgSize): number {
   const n = parseAwg(gauge);
   return 0.127e-3 * 92 ** ((36 - n) / 39);
+}
+
+/** An SWG size: an integer −6 … 50 (−6 = 7/0, 0 = 0 or 1/0) or one of the usual spellings ("7/0", "0000000", "22", "SWG 22", "22 swg"). */
+export type SwgSize = number | string;
+
+/**
+ * Imperial Standard Wire Gauge (BS 3737:1964; Order in Council 1883): diameter
+ * in inches of gauges 7/0 … 50, indexed by gauge number + 6 (7/0 is −6, 6/0 −5,
+ * … 2/0 −1, 0 is 0). From memory; the values agree with the table as widely
+ * reproduced from BS 3737 (e.g. SWG 22 = 0.028 in, 30 = 0.0124 in, 40 = 0.0048 in).
+ */
+export const SWG_DIAMETERS_INCH: readonly number[] = [
+  0.5, 0.464, 0.432, 0.4, 0.372, 0.348, // 7/0 … 2/0
+  0.324, 0.3, 0.276, 0.252, 0.232, 0.212, 0.192, 0.176, 0.16, 0.144, // 0 … 9
+  0.128, 0.116, 0.104, 0.092, 0.08, 0.072, 0.064, 0.056, 0.048, 0.04, // 10 … 19
+  0.036, 0.032, 0.028, 0.024, 0.022, 0.02, 0.018, 0.0164, 0.0148, 0.0136, // 20 … 29
+  0.0124, 0.0116, 0.0108, 0.01, 0.0092, 0.0084, 0.0076, 0.0068, 0.006, 0.0052, // 30 … 39
+  0.0048, 0.0044, 0.004, 0.0036, 0.0032, 0.0028, 0.0024, 0.002, 0.0016, 0.0012, // 40 … 49
+  0.001, // 50
+];
+
+/**
+ * Reads an SWG size as its gauge number (7/0 → −6, 6/0 → −5, … 2/0 → −1,
+ * 0 or 1/0 → 0, "22" → 22). Accepts integers −6 … 50 and strings such as
+ * "7/0", "0000000", "00", "22", "SWG 22", "22 SWG", "#22".
+ * @throws DesignError (field `gauge`) for anything else
+ */
+export function parseSwg(gauge: SwgSize): number {
+  const zeros = (text: string): number | undefined => {
+    const slash = /^([1-7])\/0$/.exec(text);
+    if (slash) return 1 - Number(slash[1]);
+    return /^0{1,7}$/.test(text) ? 1 - text.length : undefined;
+  };
+  return parseGauge(gauge, 'SWG', zeros, -6, 50, 'a number from 0 to 50, or 2/0 … 7/0 (00 … 0000000)', '7/0 to 50');
+}
+
+/**
+ * Bare diameter of an SWG size, from the table of BS 3737:1964 (the Imperial
+ * Standard Wire Gauge of 1883): SWG 22 = 0.028 in = 0.7112 mm.
+ * @param gauge SWG size (integer −6 … 50, −6 = 7/0; or a string, see `parseSwg`)
+ * @returns diameter in metres (exact conversion of the table's inches, 1 in = 25.4 mm)
+ */
+export function swgDiameter(gauge: SwgSize): number {
+  const n = parseSwg(gauge);
+  return Number((SWG_DIAMETERS_INCH[n + 6] * 0.0254).toPrecision(12));
 }
 
 /**
@@ -116,15 +180,11 @@ export function resistivityAtTemperature(
   resistivity: number = COPPER_RESISTIVITY_20C,
   temperatureCoefficient: number = COPPER_TEMPERATURE_COEFFICIENT,
 ): number {
-  if (typeof temperature !== 'number' || !Number.isFinite(temperature)) {
-    throw new DesignError('temperature', 'Temperature must be a finite number of degrees Celsius.');
-  }
+  requireFinite('temperature', temperature, 'Temperature');
   if (temperature < -273.15) throw new DesignError('temperature', `Temperature ${temperature} °C is below absolute zero.`);
   requirePositive('resistivity', resistivity, 'Resistivity');
-  if (typeof temperatureCoefficient !== 'number' || !Number.isFinite(temperatureCoefficient)) {
-    throw new DesignError('temperatureCoefficient', 'The temperature coefficient must be a finite number per kelvin.');
-  }
-  const rho = resistivity * (1 + temperatureCoefficient * (temperature - 20));
+  requireFinite('temperatureCoefficient', temperatureCoefficient, 'The temperature coefficient');
+  const rho = requireFiniteResult('temperature', resistivity * (1 + temperatureCoefficient * (temperature - 20)), 'The resistivity at this temperature');
   if (!(rho > 0)) {
     throw new DesignError('temperature', `At ${temperature} °C the linear temperature law gives no positive resistivity: the temperature is too far from 20 °C for it.`);
   }
@@ -150,7 +210,9 @@ export function wireResistanceDc(
   requirePositive('length', length, 'Wire length');
   requirePositive('wireDiameter', wireDiameter, 'Wire diameter');
   const rho = resistivityAtTemperature(temperature, resistivity, temperatureCoefficient);
-  return (rho * length) / ((Math.PI * wireDiameter * wireDiameter) / 4);
+  // ρ ℓ / (π d²/4), grouped so that a very thin wire overflows to a DesignError rather than Infinity
+  const r = (((rho / wireDiameter) * (length / wireDiameter)) * 4) / Math.PI;
+  return requireFiniteResult(r === Infinity && length > wireDiameter ? 'length' : 'wireDiameter', r, 'The wire’s resistance');
 }
 
 export interface CoilWireInput {
@@ -173,10 +235,13 @@ export interface CoilWireInput {
  * stripping and soldering. D is the centre-to-centre (mean) winding diameter.
  * @returns length in metres
  */
-export function wireLengthForCoil({ turns, diameter, pitch, leadLength = 0 }: CoilWireInput): number {
+export function wireLengthForCoil(input: CoilWireInput): number {
+  requireObject<CoilWireInput>('input', input, 'The coil');
+  const { turns, diameter, pitch, leadLength = 0 } = input;
   requirePositive('turns', turns, 'Number of turns');
   requirePositive('diameter', diameter, 'Coil diameter');
   requireNonNegative('pitch', pitch, 'Pitch');
   requireNonNegative('leadLength', leadLength, 'Lead length');
-  return turns * Math.hypot(Math.PI * diameter, pitch) + 2 * leadLength;
+  const perTurn = Math.hypot(Math.PI * diameter, pitch);
+  return requireFiniteResult(perTurn > turns ? (diameter > pitch ? 'diameter' : 'pitch') : 'turns', turns * perTurn + 2 * leadLength, 'The wire length');
 }

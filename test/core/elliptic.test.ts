@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createRequire } from 'node:module';
-import { ellipticK, ellipticE, ellipticD } from '../../src/core';
+import { ellipticK, ellipticE, ellipticD, DesignError } from '../../src/core';
+import { fieldOf, rel } from '../helpers/asserts';
 
 // The stdlib packages are CommonJS; both take the PARAMETER m = k² (their docs:
 // ellipk(0.5) ≈ 1.854, which is K at m = 0.5, not at k = 0.5 where K ≈ 1.686).
@@ -17,7 +18,6 @@ function moduli(): number[] {
   return ms;
 }
 
-const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 describe('complete elliptic integrals (parameter m = k²)', () => {
   it('stdlib uses the parameter convention too', () => {
@@ -67,9 +67,11 @@ describe('complete elliptic integrals (parameter m = k²)', () => {
     expect(rel(ellipticD(m), (Math.PI / 4) * (1 + (3 * m) / 8))).toBeLessThan(1e-15);
   });
 
-  it('rejects parameters outside [0, 1)', () => {
-    expect(() => ellipticK(1)).toThrow(RangeError);
-    expect(() => ellipticE(-0.1)).toThrow(RangeError);
-    expect(() => ellipticD(Number.NaN)).toThrow(RangeError);
+  it('rejects parameters outside [0, 1) with a DesignError naming m', () => {
+    // changed deliberately: every core export throws DesignError for bad input (was RangeError)
+    for (const bad of [1, -0.1, Number.NaN, Number.POSITIVE_INFINITY, 1e300, '0.5', null, undefined]) {
+      for (const f of [ellipticK, ellipticE, ellipticD]) expect(fieldOf(() => f(bad as number))).toBe('m');
+    }
+    expect(() => ellipticK(2)).toThrow(DesignError);
   });
 });

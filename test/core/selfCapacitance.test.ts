@@ -107,3 +107,25 @@ describe('self-resonance and apparent values (Terman 1943)', () => {
     expect(a.notes.some((n) => n.field === 'resistance')).toBe(true);
   });
 });
+
+describe('hostile inputs', () => {
+  it('a null options object and overflowing values are DesignErrors naming the field', () => {
+    expect(() => apparentCoil(null as never)).toThrow(DesignError);
+    expect(() => apparentCoil(undefined as never)).toThrow(DesignError);
+    try {
+      selfResonantFrequency(1e-300, 1e-320);
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(DesignError);
+    }
+    try {
+      medhurstSelfCapacitance(1e300, 1e-300);
+      expect.unreachable();
+    } catch (e) {
+      expect((e as DesignError).field).toBe('length');
+    }
+    // a lossless coil has an infinite apparent Q (documented); a nearly lossless one a finite Q or an error
+    expect(apparentCoil({ inductance: 1e-6, resistance: 0, selfCapacitance: 1e-12, frequency: 1e6 }).apparentQ).toBe(Infinity);
+    expect(() => apparentCoil({ inductance: 1e-6, resistance: 1e-320, selfCapacitance: 1e-12, frequency: 1e6 })).toThrow(DesignError);
+  });
+});

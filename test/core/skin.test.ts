@@ -141,3 +141,18 @@ describe('exact R_ac/R_dc of a round wire', () => {
     expect(() => wireAcResistanceRatio(0, 1e6)).toThrow(DesignError);
   });
 });
+
+describe('hostile inputs', () => {
+  it('refuses text and NaN, and stays finite at 1e±300', () => {
+    expect(() => internalImpedanceRatio('5' as never)).toThrow(DesignError);
+    expect(() => skinDepth(Number.NaN)).toThrow(DesignError);
+    expect(() => wireAcResistanceRatio(null as never, 1e6)).toThrow(DesignError);
+    for (const f of [1e-300, 1e300]) {
+      const w = wireInternalImpedance(1e-3, f);
+      for (const v of [w.resistanceRatio, w.internalInductanceRatio, w.radiusOverSkinDepth, w.skinDepth]) expect(Number.isFinite(v)).toBe(true);
+    }
+    // far below the low-frequency switch the ratios are exactly their DC values, never 0/0
+    expect(wireInternalImpedance(1e-3, 1e-300).internalInductanceRatio).toBe(1);
+    expect(wireInternalImpedance(1e-3, 1e-300).resistanceRatio).toBe(1);
+  });
+});

@@ -2,16 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   toroidInductance, toroidTurnsForInductance, inductanceFromAl, turnsFromAl, toroidCoreQ, toroidWinding, DesignError, MU_0,
 } from '../../src/core';
-
-function fieldOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof DesignError) return e.field;
-    throw e;
-  }
-  throw new Error('no DesignError thrown');
-}
+import { fieldOf } from '../helpers/asserts';
 
 // Invented demo core (no maker's size): OD 20 mm, ID 10 mm, height 5 mm, μr 10, 20 turns.
 const core = { outerDiameter: 0.02, innerDiameter: 0.01, height: 0.005, relativePermeability: 10 };
@@ -96,15 +87,40 @@ describe('toroidWinding', () => {
     // hand calculation (common practice, no published source): core 12.7 × 7.7 × 4.8 mm, 0.5 mm wire
     // per turn = 2·4.8 + (12.7 − 7.7) + 4·0.5 = 16.6 mm; 20 turns + two 30 mm leads = 392 mm
     // per layer = ⌊π (7.7 − 0.5) / 0.5⌋ = ⌊45.24⌋ = 45
-    const w = toroidWinding({ turns: 20, outerDiameter: 12.7e-3, innerDiameter: 7.7e-3, height: 4.8e-3, wireDiameter: 0.5e-3, leadLength: 30e-3 });
+    const w = toroidWinding({ turns: 20, outerDiameter: 12.7e-3, innerDiameter: 7.7e-3, height: 4.8e-3, insulatedDiameter: 0.5e-3, leadLength: 30e-3 });
     expect(w.lengthPerTurn).toBeCloseTo(16.6e-3, 12);
     expect(w.wireLength).toBeCloseTo(0.392, 12);
     expect(w.turnsPerLayer).toBe(45);
     expect(w.notes).toEqual([]);
   });
   it('warns when the turns need a second layer, and refuses wire thicker than the hole', () => {
-    const w = toroidWinding({ turns: 60, outerDiameter: 12.7e-3, innerDiameter: 7.7e-3, height: 4.8e-3, wireDiameter: 0.5e-3 });
+    const w = toroidWinding({ turns: 60, outerDiameter: 12.7e-3, innerDiameter: 7.7e-3, height: 4.8e-3, insulatedDiameter: 0.5e-3 });
     expect(w.notes.map((n) => n.field)).toEqual(['innerDiameter']);
-    expect(() => toroidWinding({ turns: 5, outerDiameter: 12.7e-3, innerDiameter: 2e-3, height: 4.8e-3, wireDiameter: 2e-3 })).toThrow(DesignError);
+    expect(() => toroidWinding({ turns: 5, outerDiameter: 12.7e-3, innerDiameter: 2e-3, height: 4.8e-3, insulatedDiameter: 2e-3 })).toThrow(DesignError);
+  });
+});
+
+describe('AL given instead of the permeability', () => {
+  it('L = AL N² (definition of AL), the core factors still from the dimensions', () => {
+    // 5 nH/turn² × 20² = 2 µH; with a typed AL the permeability-spread remark does not apply
+    const t = toroidInductance({ turns: 20, outerDiameter: 0.02, innerDiameter: 0.01, height: 0.005, al: 5e-9 });
+    expect(t.inductance).toBeCloseTo(2e-6, 18);
+    expect(t.al).toBe(5e-9);
+    expect(t.effectivePathLength * 1e3).toBeCloseTo(43.55, 2); // as by hand above (IEC 60205)
+    expect(t.notes.some((n) => n.field === 'relativePermeability')).toBe(false);
+    // √(2 µH / 5 nH) = 20 turns
+    expect(toroidTurnsForInductance({ inductance: 2e-6, outerDiameter: 0.02, innerDiameter: 0.01, height: 0.005, al: 5e-9 }).turns).toBeCloseTo(20, 12);
+  });
+  it('neither μ nor AL: refused at the permeability', () => {
+    expect(fieldOf(() => toroidInductance({ turns: 20, outerDiameter: 0.02, innerDiameter: 0.01, height: 0.005 }))).toBe('relativePermeability');
+    expect(fieldOf(() => toroidInductance({ ...core, turns: 20, al: -1 }))).toBe('al');
+  });
+  it('a null options object is a DesignError', () => {
+    for (const f of [toroidInductance, toroidTurnsForInductance, toroidWinding] as Array<(x: unknown) => unknown>) {
+      expect(() => f(null)).toThrow(DesignError);
+      expect(() => f(undefined)).toThrow(DesignError);
+    }
+    expect(fieldOf(() => toroidCoreQ(1e300, 1e-300))).toBe('muImag');
+    expect(fieldOf(() => inductanceFromAl(1e-3, 1e300))).toBe('turns');
   });
 });

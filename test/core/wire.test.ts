@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import {
-  awgDiameter, parseAwg, METRIC_WIRE_DIAMETERS, enamelledDiameter, wireResistanceDc,
+  awgDiameter, parseAwg, swgDiameter, parseSwg, SWG_DIAMETERS_INCH, METRIC_WIRE_DIAMETERS, enamelledDiameter, wireResistanceDc,
   resistivityAtTemperature, wireLengthForCoil, DesignError, COPPER_RESISTIVITY_20C,
 } from '../../src/core';
+import { fieldOf } from '../helpers/asserts';
 
 describe('AWG diameters (ASTM B258)', () => {
   it('AWG 22 is 0.6438 mm', () => {
@@ -123,5 +124,60 @@ describe('wire length for a coil', () => {
   it('rejects a negative pitch and zero turns', () => {
     expect(() => wireLengthForCoil({ turns: 0, diameter: 0.01, pitch: 0.001 })).toThrow(DesignError);
     expect(() => wireLengthForCoil({ turns: 5, diameter: 0.01, pitch: -0.001 })).toThrow(DesignError);
+  });
+});
+
+describe('SWG diameters (BS 3737:1964, the Imperial Standard Wire Gauge of 1883)', () => {
+  it('spot values of the table', () => {
+    // BS 3737:1964 table, values from memory, agreeing with the table as reproduced from the standard:
+    // SWG 22 = 0.028 in, 30 = 0.0124 in, 40 = 0.0048 in, 14 = 0.080 in, 44 = 0.0032 in, 7/0 = 0.500 in, 50 = 0.001 in
+    expect(swgDiameter(22)).toBeCloseTo(0.7112e-3, 15);
+    expect(swgDiameter(30) * 1e3).toBeCloseTo(0.31496, 12);
+    expect(swgDiameter(40) * 1e3).toBeCloseTo(0.12192, 12);
+    expect(swgDiameter(14) * 1e3).toBeCloseTo(2.032, 12);
+    expect(swgDiameter(44) * 1e3).toBeCloseTo(0.08128, 12);
+    expect(swgDiameter('7/0') * 1e3).toBeCloseTo(12.7, 12);
+    expect(swgDiameter(50) * 1e3).toBeCloseTo(0.0254, 12);
+  });
+  it('the table falls steadily: each gauge thinner than the one before, in whole or fractional thou', () => {
+    // the gauge's construction (Order in Council 1883): steps in thousandths of an inch, never increasing
+    for (let n = -6; n < 50; n++) {
+      expect(swgDiameter(n + 1)).toBeLessThan(swgDiameter(n));
+      const thou = swgDiameter(n) / 25.4e-6;
+      expect(Math.abs(thou * 10 - Math.round(thou * 10))).toBeLessThan(1e-6); // tenths of a thou at most
+    }
+    expect(SWG_DIAMETERS_INCH).toHaveLength(57);
+  });
+  it('reads the usual spellings', () => {
+    expect(parseSwg('SWG 22')).toBe(22);
+    expect(parseSwg('22 swg')).toBe(22);
+    expect(parseSwg('#36')).toBe(36);
+    expect(parseSwg('0')).toBe(0);
+    expect(parseSwg('1/0')).toBe(0);
+    expect(parseSwg('2/0')).toBe(-1);
+    expect(parseSwg('00')).toBe(-1);
+    expect(parseSwg('7/0')).toBe(-6);
+    expect(parseSwg('0000000')).toBe(-6);
+  });
+  it('refuses sizes outside 7/0 … 50 and nonsense with the field named', () => {
+    for (const bad of [51, -7, 22.5, '8/0', 'twenty', '', 'constructor', null, undefined, Number.NaN]) {
+      expect(fieldOf(() => swgDiameter(bad as number))).toBe('gauge');
+      expect(fieldOf(() => awgDiameter(bad as number))).toBe('gauge');
+    }
+  });
+  it('differs from AWG of the same number (SWG 22 = 0.711 mm, AWG 22 = 0.644 mm)', () => {
+    // ASTM B258 vs BS 3737: the two gauges are not interchangeable
+    expect(swgDiameter(22) / awgDiameter(22)).toBeCloseTo(0.7112 / 0.6438, 3);
+  });
+});
+
+describe('hostile inputs', () => {
+  it('refuses a missing options object and extreme values that would overflow', () => {
+    expect(() => wireLengthForCoil(null as never)).toThrow(DesignError);
+    expect(() => wireLengthForCoil({ turns: 1e300, diameter: 1e300, pitch: 0 })).toThrow(DesignError);
+    expect(() => wireResistanceDc(1e300, 1e-300)).toThrow(DesignError);
+    expect(() => resistivityAtTemperature('20' as never)).toThrow(DesignError);
+    expect(Number.isFinite(resistivityAtTemperature(1e300))).toBe(true); // absurd, but finite
+    expect(() => parseAwg(null as never)).toThrow(DesignError);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { coilAcResistance, solenoidProximityFactor } from '../../src/core';
+import { coilAcResistance, coilQ, solenoidProximityFactor } from '../../src/core';
 
 const wire = fc.double({ min: 50e-6, max: 3e-3, noNaN: true });
 const spacing = fc.double({ min: 1, max: 5, noNaN: true }); // pitch / wire diameter
@@ -28,8 +28,29 @@ describe('coil loss properties', () => {
         const near = coilAcResistance({ ...base, pitch: d * k });
         expect(near.acResistance).toBeGreaterThanOrEqual(near.dcResistance);
         expect(near.proximityFactor).toBeGreaterThanOrEqual(wide.proximityFactor);
-        expect(near.uncertainty).toBeGreaterThan(0);
-        expect(near.uncertainty).toBeLessThan(0.6);
+        expect(near.modelError).toBeGreaterThan(0);
+        expect(near.modelError).toBeLessThan(0.6);
+        // the band brackets the stated value, one-sided by the known bias
+        expect(near.acResistanceLow).toBeLessThanOrEqual(near.acResistance);
+        expect(near.acResistanceHigh).toBeGreaterThanOrEqual(near.acResistance);
+        expect(near.acResistanceLow).toBeLessThanOrEqual((near.acResistance / (1 + near.modelError)) * (1 + 1e-12));
+        expect(near.longCoilBias).toBeGreaterThanOrEqual(0);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe('coil Q band properties', () => {
+  it('qLow ≤ q ≤ qHigh, and the upper side is at least as wide as the lower one', () => {
+    fc.assert(
+      fc.property(wire, spacing, logFrequency, fc.integer({ min: 1, max: 500 }), (d, k, lf, n) => {
+        const r = coilQ({ turns: n, diameter: 20 * d + 5e-3, wireDiameter: d, pitch: d * k, frequency: 10 ** lf, inductance: 1e-6 });
+        expect(r.qLow).toBeLessThanOrEqual(r.q);
+        expect(r.qHigh).toBeGreaterThanOrEqual(r.q);
+        // upper: (1 + bias)(1 + u) − 1 ≥ lower: 1 − 1/(1 + u)
+        expect(r.qUncertainty.above).toBeGreaterThanOrEqual(r.qUncertainty.below - 1e-12);
+        if (n === 1) expect(r.proximityFactor).toBe(1);
       }),
       { numRuns: 300 },
     );

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { nagaokaCoefficient, solenoidInductance, turnsForInductance, MU_0 } from '../../src/core';
+import { designCoil, nagaokaCoefficient, solenoidInductance, turnsForInductance, MU_0 } from '../../src/core';
 
 /** A coil inside the model's stated range: wire ≤ r/5, pitch from the wire to r/2 (no validity notes on pitch or wire). */
 const coil = fc
@@ -84,6 +84,31 @@ describe('solenoid properties', () => {
         expect(Math.abs(t.practicalTurns - t.turns)).toBeLessThanOrEqual(0.25 + 1e-12);
       }),
       { numRuns: 300 },
+    );
+  });
+});
+
+describe('designCoil properties (solenoid)', () => {
+  it('turns as wound lie within a quarter turn of the exact turns; Q inside its band; L at f below the DC value', () => {
+    fc.assert(
+      fc.property(coil, fc.double({ min: 2, max: 300, noNaN: true }), fc.double({ min: 5, max: 8, noNaN: true }), (g, n, lf) => {
+        const target = solenoidInductance({ ...g, turns: n }).inductance;
+        let r;
+        try {
+          r = designCoil({ form: 'solenoid', inductance: target, diameter: g.diameter, pitch: g.pitch, wire: { diameter: g.wireDiameter }, frequency: 10 ** lf });
+        } catch (e) {
+          // only at or above self-resonance may a valid coil be refused, and then at the frequency
+          expect((e as { field?: string }).field).toBe('frequency');
+          return;
+        }
+        expect(Math.abs(r.turns - r.exactTurns!)).toBeLessThanOrEqual(0.25 + 1e-9);
+        expect(r.qLow!).toBeLessThanOrEqual(r.q!);
+        expect(r.qHigh!).toBeGreaterThanOrEqual(r.q!);
+        expect(r.resistanceAc!).toBeGreaterThanOrEqual(r.resistanceDc);
+        expect(r.inductanceAtFrequency!).toBeLessThanOrEqual(r.inductance);
+        expect(r.apparentInductance!).toBeGreaterThan(r.inductanceAtFrequency!);
+      }),
+      { numRuns: 200 },
     );
   });
 });
