@@ -334,7 +334,7 @@ const COMMON_FIELDS: Readonly<Record<string, CoilSpecField | null>> = {
   insulatedDiameter: 'wire.insulatedDiameter',
   frequency: 'frequency',
   s: 'frequency',
-  resistance: 'frequency',
+  resistance: null,
   windingQ: 'frequency',
   leadLength: 'leadLength',
   temperature: 'temperature',
