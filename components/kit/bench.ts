@@ -9,7 +9,7 @@ import { batch, createMemo, createSignal, type Accessor } from 'solid-js';
 import type { QuantityUnit } from '../../src/quantity';
 import { createComputation, type Computed } from './compute';
 import {
-  decodeLink, defaultChoices, defaultText, documentToSnapshot, encodeLink, fieldsInUse, putValue, readFieldText,
+  decodeLink, defaultChoices, defaultText, documentToSnapshot, followDefaults, encodeLink, fieldsInUse, putValue, readFieldText,
   readFieldTextSync, routeDesignError, setPath, snapshotToDocument, specToSnapshot, whatOf,
   type BenchDocument, type BenchSnapshot, type Choices, type DecodedLink, type FieldDef, type FieldTable,
   type FieldValue, type SpecObject, type ValueFieldDef,
@@ -183,12 +183,21 @@ export function createBenchState<S = SpecObject>(table: FieldTable): BenchState<
   const computations: Computed<unknown>[] = [];
   const route = (path: string) => routeDesignError(table, choices(), path);
 
+  /** Sets choices; fields still at their default for the old choices take the new default. */
+  function setChoicesFollowing(next: Choices): void {
+    const before = choices();
+    const texts = Object.fromEntries([...states].map(([k, st]) => [k, st.text()]));
+    const after = followDefaults(table, texts, before, next);
+    setChoices(next);
+    for (const [key, text] of Object.entries(after)) if (text !== texts[key]) field(key).setText(text);
+  }
+
   function load(s: Partial<BenchSnapshot>): void {
     batch(() => {
       if (s.choices) {
         const next: Record<string, string> = { ...choices() };
         for (const f of table) if (f.kind === 'choice' && s.choices[f.key] !== undefined) next[f.key] = s.choices[f.key];
-        setChoices(next);
+        setChoicesFollowing(next);
       }
       for (const [key, text] of Object.entries(s.texts ?? {})) states.get(key)?.setText(text);
     });
@@ -204,19 +213,7 @@ export function createBenchState<S = SpecObject>(table: FieldTable): BenchState<
     choices,
     choice: (key) => choices()[key],
     choose(key, value) {
-      batch(() => {
-        const before = choices();
-        if (before[key] === value) return;
-        const after = { ...before, [key]: value };
-        for (const f of table) {
-          if (f.kind === 'choice') continue;
-          const was = defaultText(f, before);
-          const now = defaultText(f, after);
-          const s = field(f.key);
-          if (was !== now && s.text() === was) s.setText(now);
-        }
-        setChoices(after);
-      });
+      if (choices()[key] !== value) batch(() => setChoicesFollowing({ ...choices(), [key]: value }));
     },
     field,
     inUse,

@@ -196,12 +196,29 @@ export function defaultText(f: ValueFieldDef, choices: Choices): string {
   return resolve(f.default, choices);
 }
 
-/** The table's state at its defaults. */
-export function defaultSnapshot(table: FieldTable): BenchSnapshot {
-  const choices = defaultChoices(table);
+/**
+ * The table's state at its defaults, or at the defaults for `choices` (a
+ * default may depend on a choice: a series tank's terminations are 5 Ω).
+ */
+export function defaultSnapshot(table: FieldTable, choices: Choices = {}): BenchSnapshot {
+  const all = { ...defaultChoices(table), ...choices };
   const texts: Record<string, string> = {};
-  for (const f of table) if (f.kind !== 'choice') texts[f.key] = defaultText(f, choices);
-  return { choices, texts };
+  for (const f of table) if (f.kind !== 'choice') texts[f.key] = defaultText(f, all);
+  return { choices: all, texts };
+}
+
+/**
+ * The texts after a change of choices: a field still showing its default
+ * for the old choices takes its default for the new ones; anything typed stays.
+ */
+export function followDefaults(table: FieldTable, texts: Readonly<Record<string, string>>, before: Choices, after: Choices): Record<string, string> {
+  const out = { ...texts };
+  for (const f of table) {
+    if (f.kind === 'choice') continue;
+    const was = defaultText(f, before);
+    if (out[f.key] === undefined || out[f.key] === was) out[f.key] = defaultText(f, after);
+  }
+  return out;
 }
 
 /** True when the field applies under these choices. */
@@ -475,9 +492,11 @@ export function decodeLink(table: FieldTable, search: string, base?: Choices): D
     }
     out.texts[key] = text;
     if (!out.given.includes(key)) out.given.push(key);
-    // A value given without its choice picks that choice.
+    // A value given without its choice picks that choice, unless the link's own choices rule it out.
     if (f.when && typeof f.when !== 'function') {
-      for (const [ck, cv] of Object.entries(f.when)) {
+      const pattern = Object.entries(f.when);
+      const ruledOut = pattern.some(([ck, cv]) => choiceKeysGiven.has(ck) && !(typeof cv === 'string' ? cv === choices[ck] : cv.includes(choices[ck])));
+      for (const [ck, cv] of ruledOut ? [] : pattern) {
         if (choiceKeysGiven.has(ck) || typeof cv !== 'string') continue;
         out.choices[ck] = cv;
         choices[ck] = cv;
@@ -579,20 +598,21 @@ export function snapshotToDocument(table: FieldTable, snapshot: BenchSnapshot): 
  * their text; a length must still carry its unit.
  */
 export function documentToSnapshot(table: FieldTable, doc: unknown): { snapshot: BenchSnapshot; notices: string[] } {
-  const snapshot = defaultSnapshot(table);
   const notices: string[] = [];
-  if (typeof doc !== 'object' || doc === null) return { snapshot, notices: ['The stored design is not an object; the defaults are shown.'] };
+  if (typeof doc !== 'object' || doc === null) return { snapshot: defaultSnapshot(table), notices: ['The stored design is not an object; the defaults are shown.'] };
   const storedChoices = getPath(doc, 'choices');
   const spec = getPath(doc, 'spec');
+  const chosen = defaultChoices(table);
   for (const f of table) {
     if (f.kind !== 'choice') continue;
     const v = getPath(storedChoices, f.key) ?? (f.path ? getPath(spec, f.path) : undefined);
     if (v === undefined) continue;
     const text = String(v);
-    const why = refuseLinkText(f, text, snapshot.choices);
-    if (why === null) snapshot.choices[f.key] = text;
-    else notices.push(`${whatOf(f, snapshot.choices)}: ${why}.`);
+    const why = refuseLinkText(f, text, chosen);
+    if (why === null) chosen[f.key] = text;
+    else notices.push(`${whatOf(f, chosen)}: ${why}.`);
   }
+  const snapshot = defaultSnapshot(table, chosen);
   for (const f of fieldsInUse(table, snapshot.choices)) {
     if (f.kind === 'choice') continue;
     const where = pathsOf(f).join(', ');
@@ -622,13 +642,13 @@ export function documentToSnapshot(table: FieldTable, doc: unknown): { snapshot:
  * default (optional ones are left blank).
  */
 export function specToSnapshot(table: FieldTable, spec: unknown, choices: Choices = {}, significant = 9): BenchSnapshot {
-  const snapshot = defaultSnapshot(table);
-  Object.assign(snapshot.choices, choices);
+  const chosen = { ...defaultChoices(table), ...choices };
   for (const f of table) {
     if (f.kind !== 'choice' || !f.path) continue;
     const v = getPath(spec, f.path);
-    if (typeof v === 'string' && f.options.some(([o]) => o === v)) snapshot.choices[f.key] = v;
+    if (typeof v === 'string' && f.options.some(([o]) => o === v)) chosen[f.key] = v;
   }
+  const snapshot = defaultSnapshot(table, chosen);
   const write = (f: ValueFieldDef, v: unknown): string | undefined => {
     if (typeof v === 'string') return v;
     if (typeof v !== 'number' || !Number.isFinite(v)) return undefined;

@@ -1,10 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { parseQuantityAsync, QuantityError, type QuantityUnit, type QuantityErrorCode } from '../../src/quantity';
 import { loadRestrictedMath, tokenizeExpression, expressionEngineLoaded } from '../../src/quantity/expression';
-
-function expectSI(actual: number, expected: number): void {
-  expect(Math.abs(actual - expected) / Math.abs(expected)).toBeLessThan(1e-12);
-}
+import { expectSI } from '../helpers/asserts';
 
 async function rejection(text: string, unit: QuantityUnit): Promise<QuantityError> {
   try {
@@ -46,6 +43,8 @@ describe('parseQuantityAsync: calculations', () => {
     ['(1 + 2) * 1k', '\u03a9', 3000],
     ['1 in + 10 mm', 'm', 0.0354], // 25.4 mm + 10 mm
     ['15mm/2', 'm', 0.0075],
+    ['2*10mm', 'm', 0.02],
+    ['0*1', 'm', 0], // zero needs no unit
     ['-(2*47p)', 'F', -94e-12],
     ['2pi*1M', 'Hz', TWO_PI * 1e6],
     ['\u03c0*1M', 'Hz', Math.PI * 1e6],
@@ -84,6 +83,10 @@ describe('parseQuantityAsync: refused calculations', () => {
     ['7.1mhz*2', 'Hz', 'ambiguous', /MHz/],
     ['4.7pF*2', 'H', 'wrong-unit', /gives a capacitance/],
     ['1+'.repeat(100) + '1', 'F', 'too-long', /200 characters/],
+    // a length needs its unit in a calculation too (our rule, Entering values page)
+    ['2*10', 'm', 'no-unit', /^This calculation gives 20 with no unit, and a length needs one: write the unit on its numbers/],
+    ['10mm/2mm', 'm', 'no-unit', /gives 5 with no unit/],
+    ['2*5p..10p', 'F', 'range', /A range is not allowed here/],
   ];
   it.each(refused)('%j in a %s field → %s', async (text, unit, code, message) => {
     const err = await rejection(text, unit);

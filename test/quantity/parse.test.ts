@@ -3,15 +3,7 @@ import {
   parseQuantity, looksLikeExpression, QuantityError, QuantityExpressionError, isQuantityError,
   MAX_QUANTITY_LENGTH, type QuantityUnit, type QuantityErrorCode,
 } from '../../src/quantity';
-
-/** Relative closeness: the parser builds a decimal string, so most values are exact; inches multiply once. */
-function expectSI(actual: number, expected: number): void {
-  if (expected === 0) {
-    expect(actual).toBe(0);
-    return;
-  }
-  expect(Math.abs(actual - expected) / Math.abs(expected)).toBeLessThan(1e-12);
-}
+import { expectSI } from '../helpers/asserts';
 
 // Expected SI values worked by hand. Sources for the rules:
 // SI prefixes and unit symbols — BIPM, The International System of Units (SI Brochure, 9th ed., 2019);
