@@ -7,10 +7,13 @@
  * use and where a core error is shown all come from it.
  */
 import { createMemo, For, Show } from 'solid-js';
+// Core modules imported one by one, not through the index: the page then ships only these.
+import { DesignError } from '../../src/core/errors';
+import type { DesignNote } from '../../src/core/notes';
+import { preferredNeighbours } from '../../src/core/preferred';
 import {
-  capacitanceForFrequency, characteristicImpedance, DesignError, inductanceForFrequency,
-  inductiveReactance, preferredNeighbours, resonantFrequency, type DesignNote,
-} from '../../src/core';
+  capacitanceForFrequency, characteristicImpedance, inductanceForFrequency, inductiveReactance, resonantFrequency,
+} from '../../src/core/resonance';
 import { formatQuantity, formatQuantityCompact } from '../../src/quantity';
 import { createBenchState } from '../kit/bench';
 import { createUrlState } from '../kit/createUrlState';

@@ -9,9 +9,9 @@ import { batch, createMemo, createSignal, type Accessor } from 'solid-js';
 import type { QuantityUnit } from '../../src/quantity';
 import { createComputation, type Computed } from './compute';
 import {
-  decodeLink, defaultChoices, defaultText, documentToSnapshot, followDefaults, encodeLink, fieldsInUse, putValue, readFieldText,
-  readFieldTextSync, routeDesignError, setPath, snapshotToDocument, specToSnapshot, whatOf,
-  type BenchDocument, type BenchSnapshot, type Choices, type DecodedLink, type FieldDef, type FieldTable,
+  decodeLink, defaultChoices, defaultText, followDefaults, encodeLink, fieldsInUse, putValue, readFieldText,
+  readFieldTextSync, routeDesignError, setPath, whatOf,
+  type BenchSnapshot, type Choices, type DecodedLink, type FieldDef, type FieldTable,
   type FieldValue, type SpecObject, type ValueFieldDef,
 } from './fields';
 
@@ -129,14 +129,11 @@ export interface BenchState<S = SpecObject> {
   generalError: Accessor<string | null>;
   /** The state as plain data: choices and texts of every field. */
   snapshot(): BenchSnapshot;
-  /** Applies a (partial) state: choices first, then texts. */
+  /**
+   * Applies a (partial) state: choices first, then texts. With documents.ts:
+   * a stored draft (documentToSnapshot) or a spec handed over (specToSnapshot).
+   */
   load(snapshot: Partial<BenchSnapshot>): void;
-  /** The document a draft or a shop-sheet file stores (fields in use only). */
-  toDocument(): BenchDocument;
-  /** Loads a stored document; returns notices for the values refused. */
-  loadDocument(doc: unknown): string[];
-  /** Loads an SI spec (a hand-off), under these choices; see specToSnapshot. */
-  loadSpec(spec: unknown, choices?: Choices): void;
   /** Reads a query string and applies what passes (see decodeLink). */
   readLink(search: string): DecodedLink;
   /** The query string for the current state (reactive). */
@@ -244,15 +241,6 @@ export function createBenchState<S = SpecObject>(table: FieldTable): BenchState<
     },
     snapshot,
     load,
-    toDocument: () => snapshotToDocument(table, snapshot()),
-    loadDocument(doc) {
-      const { snapshot: s, notices } = documentToSnapshot(table, doc);
-      load(s);
-      return notices;
-    },
-    loadSpec(spec, c) {
-      load(specToSnapshot(table, spec, c));
-    },
     readLink(search) {
       const d = decodeLink(table, search, choices());
       load(d);

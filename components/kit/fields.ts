@@ -10,7 +10,7 @@
  *   'wire.diameter'), to the field in use that fills that path
  *   (routeDesignError), or to the bench's general message when none does;
  * - the plain object a draft or a shop-sheet file stores (BenchDocument), and
- *   the way back from an SI spec to field texts (specToSnapshot).
+ *   the way back from an SI spec to field texts: see documents.ts.
  *
  * A bench's state is a BenchSnapshot: its choices and the texts as typed.
  * The link, a saved draft and a shop-sheet file all write that same state;
@@ -566,127 +566,6 @@ export function putValue(spec: SpecObject, f: ValueFieldDef, value: FieldValue):
     setPath(spec, f.low, r.low);
     setPath(spec, f.high, r.high);
   } else setPath(spec, f.path, value as number);
-}
-
-/** The document a draft or a shop-sheet file stores for a state: choices, and texts of the fields in use by path. */
-export function snapshotToDocument(table: FieldTable, snapshot: BenchSnapshot): BenchDocument {
-  const choices = { ...defaultChoices(table), ...snapshot.choices };
-  const spec: SpecObject = {};
-  const usedChoices: Record<string, string> = {};
-  for (const f of fieldsInUse(table, choices)) {
-    if (f.kind === 'choice') {
-      usedChoices[f.key] = choices[f.key];
-      if (f.path) setPath(spec, f.path, choices[f.key]);
-      continue;
-    }
-    const text = (snapshot.texts[f.key] ?? defaultText(f, choices)).trim();
-    if (text === '') continue;
-    const ends = f.kind === 'range' ? splitRange(text) : null;
-    if (f.kind !== 'range') setPath(spec, f.path, text);
-    else if (ends) {
-      setPath(spec, f.low, lowEndWithSharedUnit(ends[0], ends[1]));
-      setPath(spec, f.high, ends[1]);
-    }
-  }
-  return { choices: usedChoices, spec };
-}
-
-/**
- * The state for a stored document, checked like a link: every value goes
- * through its field's grammar and range; refused values keep the default and
- * are listed as notices. Numbers stored as numbers (turns: 12) are read as
- * their text; a length must still carry its unit.
- */
-export function documentToSnapshot(table: FieldTable, doc: unknown): { snapshot: BenchSnapshot; notices: string[] } {
-  const notices: string[] = [];
-  if (typeof doc !== 'object' || doc === null) return { snapshot: defaultSnapshot(table), notices: ['The stored design is not an object; the defaults are shown.'] };
-  const storedChoices = getPath(doc, 'choices');
-  const spec = getPath(doc, 'spec');
-  const chosen = defaultChoices(table);
-  for (const f of table) {
-    if (f.kind !== 'choice') continue;
-    const v = getPath(storedChoices, f.key) ?? (f.path ? getPath(spec, f.path) : undefined);
-    if (v === undefined) continue;
-    const text = String(v);
-    const why = refuseLinkText(f, text, chosen);
-    if (why === null) chosen[f.key] = text;
-    else notices.push(`${whatOf(f, chosen)}: ${why}.`);
-  }
-  const snapshot = defaultSnapshot(table, chosen);
-  for (const f of fieldsInUse(table, snapshot.choices)) {
-    if (f.kind === 'choice') continue;
-    const where = pathsOf(f).join(', ');
-    const stored = pathsOf(f).map((p) => getPath(spec, p));
-    if (stored.every((v) => v === undefined)) {
-      if (f.optional) snapshot.texts[f.key] = '';
-      continue;
-    }
-    if (!stored.every((v) => typeof v === 'string' || typeof v === 'number')) {
-      notices.push(`${whatOf(f, snapshot.choices)} (${where}): expected text such as “${defaultText(f, snapshot.choices) || '…'}”.`);
-      continue;
-    }
-    const text = stored.map((v) => String(v).trim()).join('..');
-    const why = refuseLinkText(f, text, snapshot.choices);
-    if (why === null) snapshot.texts[f.key] = text;
-    else notices.push(`${whatOf(f, snapshot.choices)} (${where}): ${why.replace(/\.$/, '')}.`);
-  }
-  return { snapshot, notices };
-}
-
-/**
- * Field texts for an SI spec (a coil handed back from the Tank bench, a
- * design read from a shop-sheet file): each value field in use under
- * `choices` gets the value at its path, written compactly with up to
- * `significant` figures ("10.5 mm", "12", "7.1 MHz"). Choices with a path
- * take the spec's value there. Fields whose path the spec lacks keep their
- * default (optional ones are left blank).
- */
-export function specToSnapshot(table: FieldTable, spec: unknown, choices: Choices = {}, significant = 9): BenchSnapshot {
-  const chosen = { ...defaultChoices(table), ...choices };
-  for (const f of table) {
-    if (f.kind !== 'choice' || !f.path) continue;
-    const v = getPath(spec, f.path);
-    if (typeof v === 'string' && f.options.some(([o]) => o === v)) chosen[f.key] = v;
-  }
-  const snapshot = defaultSnapshot(table, chosen);
-  const write = (f: ValueFieldDef, v: unknown): string | undefined => {
-    if (typeof v === 'string') return v;
-    if (typeof v !== 'number' || !Number.isFinite(v)) return undefined;
-    return f.kind === 'number' ? String(Number(v.toPrecision(significant))).replace('e+', 'e') : formatQuantityCompact(v, f.unit, significant);
-  };
-  for (const f of fieldsInUse(table, snapshot.choices)) {
-    if (f.kind === 'choice') continue;
-    const texts = pathsOf(f).map((p) => write(f, getPath(spec, p)));
-    if (texts.every((t) => t !== undefined)) snapshot.texts[f.key] = texts.join('..');
-    else if (f.optional) snapshot.texts[f.key] = '';
-  }
-  return snapshot;
-}
-
-/**
- * The SI spec of a state, worked out away from the page (the shop sheet at
- * build time, tests): values of the fields in use by path, choices with a
- * path by value. `errors` holds the sentence for each field that is not a
- * value, by key; the spec then lacks those paths.
- */
-export async function snapshotToSpec(table: FieldTable, snapshot: BenchSnapshot): Promise<{ spec: SpecObject; errors: Record<string, string> }> {
-  const choices = { ...defaultChoices(table), ...snapshot.choices };
-  const spec: SpecObject = {};
-  const errors: Record<string, string> = {};
-  for (const f of fieldsInUse(table, choices)) {
-    if (f.kind === 'choice') {
-      if (f.path) setPath(spec, f.path, choices[f.key]);
-      continue;
-    }
-    const text = snapshot.texts[f.key] ?? defaultText(f, choices);
-    try {
-      const v = await readFieldText(f, text, choices);
-      if (v !== undefined) putValue(spec, f, v);
-    } catch (e) {
-      errors[f.key] = messageOf(e);
-    }
-  }
-  return { spec, errors };
 }
 
 /** Re-exported so a table can declare ranges without importing the quantity layer. */

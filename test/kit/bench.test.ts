@@ -7,10 +7,11 @@
  */
 import { describe, expect, it, vi } from 'vitest';
 
-vi.mock('solid-js', async () => import('../../node_modules/solid-js/dist/solid.js'));
+vi.mock('solid-js', async () => import('solid-js/dist/solid.js' as string));
 
 const { createRoot } = await import('solid-js');
 const { createBenchState } = await import('../../components/kit/bench');
+const { documentToSnapshot, snapshotToDocument } = await import('../../components/kit/documents');
 const { DesignError } = await import('../../src/core/errors');
 const { COIL_LIKE, TANK_LIKE } = await import('./sampleTables');
 const { RESONANCE_FIELDS, solveResonance } = await import('../../components/benches/ResonanceBench');
@@ -140,10 +141,12 @@ describe('createBenchState', () => {
     a.choose('coilLoss', 'R');
     a.field('Rcoil').setText('2R2');
     a.field('Rs').setText('');
-    const doc = JSON.parse(JSON.stringify(a.toDocument()));
+    const doc = JSON.parse(JSON.stringify(snapshotToDocument(TANK_LIKE, a.snapshot())));
     expect(doc.spec).toMatchObject({ mode: 'parallel', coilResistance: '2R2' });
     const b = createBenchState(TANK_LIKE);
-    expect(b.loadDocument(doc)).toEqual([]);
+    const { snapshot, notices } = documentToSnapshot(TANK_LIKE, doc);
+    expect(notices).toEqual([]);
+    b.load(snapshot);
     expect(b.choice('coilLoss')).toBe('R');
     expect(b.spec()).toEqual(a.spec());
   }));
@@ -151,7 +154,7 @@ describe('createBenchState', () => {
   it('runs the Resonance bench’s spec through the core (Thomson’s formula, Terman 1943)', () => inRoot(() => {
     const b = createBenchState(RESONANCE_FIELDS);
     b.choose('solve', 'f');
-    const calc = b.compute((spec) => solveResonance(spec as Parameters<typeof solveResonance>[0]));
+    const calc = b.compute((spec) => solveResonance(spec as unknown as Parameters<typeof solveResonance>[0]));
     expect(rel(calc.result()!.frequency, thomson(4.7e-6, 100e-12))).toBeLessThan(1e-12);
     // (2π f)² underflows to zero: the message lands at the frequency when the core names it,
     // else (it names the capacitance being solved for, which no field fills) as a general one

@@ -9,10 +9,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  applies, decodeLink, defaultChoices, defaultSnapshot, defineFields, documentToSnapshot, encodeLink, fieldsInUse, pathsOf,
-  readFieldTextSync, refuseLinkText, routeDesignError, snapshotToDocument, snapshotToSpec, specToSnapshot,
-  type BenchSnapshot, type FieldTable,
+  applies, decodeLink, defaultChoices, defaultSnapshot, defineFields, encodeLink, fieldsInUse, pathsOf,
+  readFieldTextSync, refuseLinkText, routeDesignError, type BenchSnapshot, type FieldTable,
 } from '../../components/kit/fields';
+import { documentToSnapshot, snapshotToDocument, snapshotToSpec, specToSnapshot } from '../../components/kit/documents';
 import { RESONANCE_FIELDS } from '../../components/benches/ResonanceBench';
 import { BAND_LIKE, COIL_LIKE, TANK_LIKE } from './sampleTables';
 import { rel } from '../helpers/asserts';
