@@ -7,21 +7,9 @@ import {
   complex, cAdd, cDiv, cInv, cMul, cAbs, cArg, cParallel,
   DesignError, EXTRA_LOW_VOLTAGE_AC_RMS, TWO_PI, type TankInput,
 } from '../../src/core';
+import { fieldOf, rel } from '../helpers/asserts';
 
 const math = create(all);
-
-/** Run fn, expect a DesignError, return its field. */
-function fieldOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(DesignError);
-    return (e as DesignError).field;
-  }
-  throw new Error('expected a DesignError');
-}
-
-const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 // A demo tank (invented values): 10 µH with 100 pF, f0 ≈ 5.033 MHz, X0 = √(L/C) = 316.2 Ω.
 const L = 10e-6;
