@@ -197,3 +197,21 @@ export function readCoilLink(coilTable: FieldTable, text: string): CoilLinkReadi
   const texts = { ...defaultSnapshot(coilTable, choices).texts, ...d.texts };
   return { query: encodeLink(coilTable, { choices, texts }) };
 }
+
+/**
+ * The line that greets a coil handed over, from the texts its link gave the
+ * Tank table (as typed by the Coil bench): what came, and what is the Tank
+ * bench's own.
+ */
+export function handOffGreeting(texts: Readonly<Record<string, string>>): string {
+  const parts: string[] = [];
+  if (texts.L) parts.push(`L = ${texts.L}`);
+  if (texts.coilQ) parts.push(`Q ${texts.coilQ}${texts.f ? ` at ${texts.f}` : ''}`);
+  if (texts.Cself) parts.push(`self-capacitance ${texts.Cself}`);
+  const coil = parts.length ? `: ${parts.join(', ')}` : '';
+  const tuning = texts.C
+    ? ` C = ${texts.C} tunes it to ${texts.f || 'its working frequency'}.`
+    : ' Set the capacitor to tune it.';
+  const own = texts.coilQ ? 'Source and load are' : 'The coil’s Q (not carried), source and load are';
+  return `Coil from the Coil bench${coil}.${tuning} ${own} this bench’s own: set them for your circuit.`;
+}

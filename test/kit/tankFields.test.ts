@@ -13,8 +13,9 @@ import {
   routeDesignError, type BenchSnapshot, type FieldTable, type ValueFieldDef,
 } from '../../components/kit/fields';
 import { documentToSnapshot, snapshotToDocument, snapshotToSpec } from '../../components/kit/documents';
+import { COIL_FIELDS, designCoilFromFields, tankHandOff } from '../../components/benches/coilFields';
 import {
-  collapseNoteOf, COIL_LINK_KEY, readCoilLink, splitCoilLink, stressOf, sweepSpan, TANK_FIELDS, tankOf, withCoilLink,
+  collapseNoteOf, COIL_LINK_KEY, handOffGreeting, readCoilLink, splitCoilLink, stressOf, sweepSpan, TANK_FIELDS, tankOf, withCoilLink,
   type TankSpec,
 } from '../../components/benches/tankFields';
 import { analyzeTank } from '../../src/core/tank';
@@ -290,3 +291,33 @@ describe('A coil handed over from the Coil bench', () => {
   });
 });
 
+
+describe('The hand-off from the Coil bench and the way back, with the Coil bench’s own table', () => {
+  const COIL = COIL_FIELDS as FieldTable;
+  it.each([
+    ['solenoid', {}, {}],
+    ['solenoid, spaced, SWG, cold', { wind: 'pitch', wire: 'swg' }, { p: '1.5 mm', f: '3.6 MHz', T: '-20' }],
+    ['toroid on AL', { form: 'toroid', core: 'al' }, { AL: '4.9 nH', L: '2.2u', f: '10.1M' }],
+    ['multilayer', { form: 'multilayer' }, { L: '100u', f: '1M' }],
+  ] as const)('%s: the tank resonates at the coil’s frequency, and the coil comes back whole', async (_what, choices, texts) => {
+    const all = { ...defaultChoices(COIL), ...choices };
+    const coilState: BenchSnapshot = { choices: all, texts: { ...defaultSnapshot(COIL, all).texts, ...texts } };
+    const { spec: raw, errors } = await snapshotToSpec(COIL, coilState);
+    expect(errors).toEqual({});
+    const coilResult = designCoilFromFields(raw, all);
+    const coilQuery = encodeLink(COIL, coilState);
+    const href = tankHandOff(coilResult, coilQuery)!.href;
+    const { rest, coil } = splitCoilLink(new URL(href, 'http://bench').search);
+    // the tank's part reads against the Tank table without a notice
+    const d = decodeLink(TANK_FIELDS, rest);
+    expect(d.notices).toEqual([]);
+    const a = analyzeTank(tankOf(await specOf(d.choices, d.texts)));
+    // the |Z| peak of the tank built from the coil is at the coil's working frequency (within 0.5 %)
+    expect(rel(a.resonantFrequency, coilResult.frequency!)).toBeLessThan(5e-3);
+    // the way back: the coil's query read with its own table and written again is the coil's own link
+    const back = readCoilLink(COIL, coil!);
+    expect(back).toEqual({ query: coilQuery });
+    expect(handOffGreeting(d.texts)).toMatch(/^Coil from the Coil bench: L = /);
+    if (d.texts.coilQ === undefined) expect(handOffGreeting(d.texts)).toMatch(/coil’s Q \(not carried\)/);
+  });
+});
