@@ -123,10 +123,14 @@ export function stressOf(spec: TankSpec): TankStressInput | null {
   return out;
 }
 
-/** Points in the plotted and downloadable sweep. */
-export const SWEEP_POINTS = 1000;
+/**
+ * Points in the plotted and downloadable sweep: odd, so that a log sweep
+ * centred on the resonance has a point exactly there (the plot's table of
+ * key points then reads the peak itself, not a value between two points).
+ */
+export const SWEEP_POINTS = 1001;
 
-/** Sweep span around the loaded peak: about ± 6 bandwidths, at most a decade each way (log spaced). */
+/** Sweep span around a resonance: about ± 6 bandwidths, at most a decade each way (log spaced; `centre` is their geometric mean). */
 export function sweepSpan(centre: number, bandwidth: number): { start: number; stop: number } {
   const s = Math.min(1 + (6 * bandwidth) / centre, 10);
   return { start: centre / s, stop: centre * s };

@@ -15,7 +15,7 @@ import {
 import { documentToSnapshot, snapshotToDocument, snapshotToSpec } from '../../components/kit/documents';
 import { COIL_FIELDS, designCoilFromFields, tankHandOff } from '../../components/benches/coilFields';
 import {
-  collapseNoteOf, COIL_LINK_KEY, handOffGreeting, readCoilLink, splitCoilLink, stressOf, sweepSpan, TANK_FIELDS, tankOf, withCoilLink,
+  collapseNoteOf, COIL_LINK_KEY, handOffGreeting, readCoilLink, splitCoilLink, stressOf, sweepSpan, SWEEP_POINTS, TANK_FIELDS, tankOf, withCoilLink,
   type TankSpec,
 } from '../../components/benches/tankFields';
 import { analyzeTank } from '../../src/core/tank';
@@ -59,7 +59,7 @@ async function specOf(choices: Record<string, string>, texts: Record<string, str
 function runBench(spec: TankSpec): void {
   const tank = tankOf(spec);
   const a = analyzeTank(tank);
-  sweepTank(tank, { ...sweepSpan(a.loadedResonantFrequency, a.bandwidth), points: 50, spacing: 'log' });
+  sweepTank(tank, { ...sweepSpan(a.resonantFrequency, a.bandwidth), points: 51, spacing: 'log' });
   const driven = stressOf(spec);
   if (driven) tankStress(driven);
 }
@@ -194,6 +194,18 @@ describe('What the core is given', () => {
   it('the sweep spans about six bandwidths each side, at most a decade', () => {
     expect(sweepSpan(1e6, 1e4)).toEqual({ start: 1e6 / 1.06, stop: 1e6 * 1.06 });
     expect(sweepSpan(1e6, 1e7)).toEqual({ start: 1e5, stop: 1e7 });
+  });
+
+  it('the plotted sweep, centred on the resonance, has its middle point on the |Z| peak', async () => {
+    for (const texts of [{}, { Rs: '50', Rload: '' }, { coilQ: '5', Rs: '', Rload: '' }]) {
+      const tank = tankOf(await specOf({}, texts));
+      const a = analyzeTank(tank);
+      const sw = sweepTank(tank, { ...sweepSpan(a.resonantFrequency, a.bandwidth), points: SWEEP_POINTS, spacing: 'log' });
+      const mid = (SWEEP_POINTS - 1) / 2;
+      expect(rel(sw.frequency[mid], a.resonantFrequency)).toBeLessThan(1e-12);
+      expect(rel(sw.magnitude[mid], a.dynamicResistance)).toBeLessThan(1e-9);
+      expect(Math.max(...sw.magnitude)).toBe(sw.magnitude[mid]);
+    }
   });
 });
 
