@@ -4,16 +4,18 @@ import solid from '@astrojs/solid-js';
 import mdx from '@astrojs/mdx';
 import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
+import { KATEX_OPTIONS } from './components/kit/tex.ts';
 
-// Formulas in Markdown/MDX are typeset by KaTeX at build time (rehype-katex):
-// pages ship KaTeX's CSS and fonts, never its JavaScript.
+// Formulas in Markdown/MDX are typeset by KaTeX at build time (rehype-katex) as
+// MathML only, like the benches' formulas (components/kit/tex.ts): the browser
+// lays MathML out itself, so pages ship no KaTeX JavaScript, stylesheet or fonts.
 export default defineConfig({
   site: 'https://tankwright.invalid',
   trailingSlash: 'ignore',
   integrations: [solid(), mdx()],
   markdown: {
     remarkPlugins: [remarkMath],
-    rehypePlugins: [rehypeKatex],
+    rehypePlugins: [[rehypeKatex, KATEX_OPTIONS]],
   },
   server: { port: 4321, host: 'localhost' },
   devToolbar: { enabled: false },

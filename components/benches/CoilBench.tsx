@@ -33,7 +33,8 @@ export type CoilFormulaKey =
   | 'solenoidL' | 'wheeler' | 'meanDiameter' | 'overall' | 'windingLength' | 'wireSolenoid' | 'rdc' | 'racSolenoid'
   | 'q' | 'cself' | 'srf' | 'apparent' | 'toroidL' | 'al' | 'alTurns' | 'pathLength' | 'wireToroid' | 'racSkin'
   | 'toroidQ' | 'multilayerL' | 'wireMultilayer' | 'practical';
-export type CoilFormulas = Record<CoilFormulaKey, string>;
+/** The page's typeset formulas, handed over as slots of the island (see kit/Formula). */
+export type CoilFormulas = Record<CoilFormulaKey, JSX.Element>;
 
 const AWG_OPTIONS = Array.from({ length: 33 }, (_, i) => String(i + 8)); // AWG 8 … 40
 
@@ -140,6 +141,8 @@ export interface CoilDesign {
   frequency: number;
   notes: DesignNote[];
   sweep?: { f: number[]; q: number[]; qa: number[]; la: number[] };
+  /** First and last frequency of the sweep (known before the sweep is worked out). */
+  sweepRange?: [number, number];
 }
 
 /** Core argument names → this bench's field ids, per form. */
@@ -160,7 +163,7 @@ function dedupe(notes: DesignNote[]): DesignNote[] {
 
 const SWEEP_POINTS = 120;
 
-export default function CoilBench(props: { formulas: CoilFormulas }) {
+export default function CoilBench(props: CoilFormulas) {
   const [form, setForm] = createSignal<CoilForm>('solenoid');
   const [given, setGiven] = createSignal<CoilGiven>('L');
   const [dia, setDia] = createSignal<'former' | 'mean'>('former');
@@ -289,10 +292,13 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
       const app = apparentCoil({ inductance: inductanceAtF, resistance: loss.acResistance, selfCapacitance: cs.selfCapacitance, frequency });
       notes.push(...loss.notes, ...cs.notes, ...app.notes);
       const srf = app.selfResonantFrequency;
-      // Sweep f/10 … 0.9 f_sr on a log scale (numbers from the core at each point).
+      // Sweep f/10 … 0.9 f_sr on a log scale (numbers from the core at each point), worked out
+      // when the plot first reads it (it is built only when scrolled into view).
       const lo = frequency / 10;
       const hi = Math.max(0.9 * srf, frequency * 1.01);
-      const sweep = { f: [] as number[], q: [] as number[], qa: [] as number[], la: [] as number[] };
+      let sweep: CoilDesign['sweep'];
+      const sweepNow = () => {
+      sweep = { f: [] as number[], q: [] as number[], qa: [] as number[], la: [] as number[] };
       for (let i = 0; i < SWEEP_POINTS; i++) {
         const fi = lo * (hi / lo) ** (i / (SWEEP_POINTS - 1));
         if (fi >= srf) break;
@@ -305,12 +311,15 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
         sweep.qa.push((2 * Math.PI * fi * li * k) / r);
         sweep.la.push(li / k);
       }
+      return sweep;
+      };
       return {
         form: fm, given: given(), exactTurns, turns, inductance: sol.inductance, target: giveL ? v.L : undefined,
         wheeler: sol.wheelerInductance, meanDiameter, overallDiameter, wireDiameter, pitch, windingLength: length,
         wireLength: loss.wireLength, dcResistance: loss.dcResistance, acResistance: loss.acResistance, uncertainty: loss.uncertainty,
         inductanceAtF, q: loss.q, selfCapacitance: cs.selfCapacitance, srf, apparentInductance: app.apparentInductance,
-        apparentQ: app.apparentQ, frequency, notes: dedupe(notes), sweep,
+        apparentQ: app.apparentQ, frequency, notes: dedupe(notes), sweepRange: [lo, Math.min(hi, srf)],
+        get sweep() { return sweep ?? sweepNow(); },
       };
     }
 
@@ -516,55 +525,55 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
                 <strong>{formatQuantity(r()!.inductance, 'H', 4)}</strong> ({percent(r()!.inductance / r()!.target! - 1)}).
               </Show>
             </p>
-            <Formula html={props.formulas.practical} source={r()?.form === 'solenoid' ? 'half turns: leads leave on opposite sides' : 'whole turns: every pass through the hole is one turn'} />
+            <Formula math={props.practical} source={r()?.form === 'solenoid' ? 'half turns: leads leave on opposite sides' : 'whole turns: every pass through the hole is one turn'} />
           </ResultRow>
         </Show>
         <ResultRow id="out-L" label={given() === 'L' ? 'Inductance as wound' : 'Inductance'} symbol="L" value={r()?.inductance} unit="H" stale={stale()} primary={given() === 'N'} significant={5}>
           <Show when={form() === 'solenoid'}>
-            <Formula html={props.formulas.solenoidL} source="Nagaoka 1909; Rosa 1907; Grover 1946, ch. 16 and Table 7" validity="round wire, low frequency (includes the wire’s internal inductance), no metal or core nearby, pitch small beside the radius" />
+            <Formula math={props.solenoidL} source="Nagaoka 1909; Rosa 1907; Grover 1946, ch. 16 and Table 7" validity="round wire, low frequency (includes the wire’s internal inductance), no metal or core nearby, pitch small beside the radius" />
           </Show>
           <Show when={form() === 'toroid'}>
-            <Formula html={core() === 'al' ? props.formulas.al : props.formulas.toroidL} source={core() === 'al' ? 'definition of AL' : 'Ampère’s law; Grover 1946; Snelling 1988'} validity="evenly spread winding, all flux in the core; μ′ varies from core to core" />
+            <Formula math={core() === 'al' ? props.al : props.toroidL} source={core() === 'al' ? 'definition of AL' : 'Ampère’s law; Grover 1946; Snelling 1988'} validity="evenly spread winding, all flux in the core; μ′ varies from core to core" />
           </Show>
           <Show when={form() === 'multilayer'}>
-            <Formula html={props.formulas.multilayerL} source="Wheeler, Proc. IRE 16, 1928 (a, b, c in inches)" validity="about 1–2 % while 6a, 9b and 10c are within a factor of two of each other" />
+            <Formula math={props.multilayerL} source="Wheeler, Proc. IRE 16, 1928 (a, b, c in inches)" validity="about 1–2 % while 6a, 9b and 10c are within a factor of two of each other" />
           </Show>
         </ResultRow>
 
         <Show when={form() === 'solenoid'}>
           <ResultRow id="out-wheeler" label="Wheeler’s formula, for comparison" value={r()?.wheeler} unit="H" stale={stale()}>
-            <Formula html={props.formulas.wheeler} source="Wheeler, Proc. IRE 16, 1928 (r, l in inches)" validity="current sheet, within about 1 % for l > 0.4 D; no round-wire correction" />
+            <Formula math={props.wheeler} source="Wheeler, Proc. IRE 16, 1928 (r, l in inches)" validity="current sheet, within about 1 % for l > 0.4 D; no round-wire correction" />
           </ResultRow>
           <ResultRow id="out-D" label="Mean winding diameter (wire centre to centre)" symbol="D" value={r()?.meanDiameter} unit="m" stale={stale()}>
-            <Formula html={props.formulas.meanDiameter} source="geometry" validity={dia() === 'former' ? 'former diameter plus one overall wire diameter' : 'as typed'} />
+            <Formula math={props.meanDiameter} source="geometry" validity={dia() === 'former' ? 'former diameter plus one overall wire diameter' : 'as typed'} />
           </ResultRow>
           <ResultRow id="out-len" label="Winding length" symbol="l" value={r()?.windingLength} unit="m" stale={stale()}>
-            <Formula html={props.formulas.windingLength} source="geometry" validity={wind() === 'close' ? 'close-wound: pitch = overall wire diameter' : 'spaced winding'} />
+            <Formula math={props.windingLength} source="geometry" validity={wind() === 'close' ? 'close-wound: pitch = overall wire diameter' : 'spaced winding'} />
           </ResultRow>
         </Show>
         <Show when={form() === 'toroid'}>
           <ResultRow id="out-al" label="AL of the core" value={r()?.al} unit="H" stale={stale()} significant={4}>
             <p class="tw-coil-detail">Per turn². <Show when={r()?.pathLength !== undefined}>From the dimensions: magnetic path l<sub>e</sub> = {formatQuantity(r()!.pathLength!, 'm', 4)}, area A<sub>e</sub> = {formatNumber(r()!.area! * 1e6, 4)} mm².</Show></p>
-            <Formula html={props.formulas.pathLength} source="IEC 60205 core factors" validity="rectangular section" />
+            <Formula math={props.pathLength} source="IEC 60205 core factors" validity="rectangular section" />
           </ResultRow>
         </Show>
 
         <ResultRow id="out-wire" label="Wire to cut" symbol="ℓ" value={r()?.wireLength} unit="m" stale={stale()}>
           <p class="tw-coil-detail">Includes both leads; add your own allowance for stripping and soldering.</p>
-          <Formula html={form() === 'solenoid' ? props.formulas.wireSolenoid : form() === 'toroid' ? props.formulas.wireToroid : props.formulas.wireMultilayer}
+          <Formula math={form() === 'solenoid' ? props.wireSolenoid : form() === 'toroid' ? props.wireToroid : props.wireMultilayer}
             source={form() === 'toroid' ? 'geometry (our estimate: wire centre line round the core’s section)' : form() === 'multilayer' ? 'mean turn length times turns' : 'geometry of the helix'} />
         </ResultRow>
         <ResultRow id="out-rdc" label="DC resistance" value={r()?.dcResistance} unit="Ω" stale={stale()}>
-          <Formula html={props.formulas.rdc} source="IEC 60028 annealed copper, ρ₂₀ = 1/58 Ω·mm²/m, α = 0.00393 /K" />
+          <Formula math={props.rdc} source="IEC 60028 annealed copper, ρ₂₀ = 1/58 Ω·mm²/m, α = 0.00393 /K" />
         </ResultRow>
 
         <Show when={form() !== 'multilayer'}>
           <ResultRow id="out-rac" label={`AC resistance at ${r() ? formatQuantity(r()!.frequency, 'Hz') : 'f'}`} value={r()?.acResistance} unit="Ω" stale={stale()}>
             <Show when={form() === 'solenoid'}>
-              <Formula html={props.formulas.racSolenoid} source="Butterworth 1922 (exact skin effect; transverse-field loss in a long-coil field)" validity="best for l/D ≥ 1 and d/p ≤ 0.7; overstates the loss of close-wound coils" />
+              <Formula math={props.racSolenoid} source="Butterworth 1922 (exact skin effect; transverse-field loss in a long-coil field)" validity="best for l/D ≥ 1 and d/p ≤ 0.7; overstates the loss of close-wound coils" />
             </Show>
             <Show when={form() === 'toroid'}>
-              <Formula html={props.formulas.racSkin} source="exact skin effect of a round wire (Bessel functions)" validity="proximity of the other turns not included: a lower bound" />
+              <Formula math={props.racSkin} source="exact skin effect of a round wire (Bessel functions)" validity="proximity of the other turns not included: a lower bound" />
             </Show>
           </ResultRow>
           <ResultRow id="out-q" label={`Unloaded Q at ${r() ? formatQuantity(r()!.frequency, 'Hz') : 'f'}`} symbol="Q" value={r()?.q} stale={stale()} significant={3}>
@@ -573,33 +582,33 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
                 Expected uncertainty ±{Math.round(r()!.uncertainty! * 100)} %: Q between about {formatNumber(r()!.q! / (1 + r()!.uncertainty!), 3)} and {formatNumber(r()!.q! / Math.max(0.05, 1 - r()!.uncertainty!), 3)}.
                 Self-capacitance lowers the Q you measure across the coil to {formatNumber(r()!.apparentQ!, 3)}.
               </p>
-              <Formula html={props.formulas.q} source="definition of Q; L at f (skin effect removes part of the wire’s internal inductance)" validity="uncertainty is our estimate: ±(3 % + 30 to 50 % of the proximity share of the loss)" />
+              <Formula math={props.q} source="definition of Q; L at f (skin effect removes part of the wire’s internal inductance)" validity="uncertainty is our estimate: ±(3 % + 30 to 50 % of the proximity share of the loss)" />
             </Show>
             <Show when={form() === 'toroid'}>
               <p class="tw-coil-detail">Core alone {formatNumber(r()?.coreQ ?? NaN, 3)}, winding alone (skin effect only) {formatNumber(r()?.windingQ ?? NaN, 3)}.</p>
-              <Formula html={props.formulas.toroidQ} source="Snelling 1988 (series complex permeability)" validity="μ′ and μ″ at the working frequency; the combination is an upper bound since proximity loss is left out" />
+              <Formula math={props.toroidQ} source="Snelling 1988 (series complex permeability)" validity="μ′ and μ″ at the working frequency; the combination is an upper bound since proximity loss is left out" />
             </Show>
           </ResultRow>
         </Show>
 
         <Show when={form() === 'solenoid'}>
           <ResultRow id="out-cself" label="Self-capacitance" symbol="Cₛ" value={r()?.selfCapacitance} unit="F" stale={stale()}>
-            <Formula html={props.formulas.cself} source="Medhurst, Wireless Engineer 24, 1947" validity="0.1 ≤ l/D ≤ 50, about ±5 % for his coils; surroundings add to it" />
+            <Formula math={props.cself} source="Medhurst, Wireless Engineer 24, 1947" validity="0.1 ≤ l/D ≤ 50, about ±5 % for his coils; surroundings add to it" />
           </ResultRow>
           <ResultRow id="out-srf" label="Self-resonant frequency" value={r()?.srf} unit="Hz" stale={stale()}>
-            <Formula html={props.formulas.srf} source="lumped model" validity="an estimate: the winding is really a helical line; keep f below about half of it" />
+            <Formula math={props.srf} source="lumped model" validity="an estimate: the winding is really a helical line; keep f below about half of it" />
           </ResultRow>
           <ResultRow id="out-lapp" label={`Apparent inductance at ${r() ? formatQuantity(r()!.frequency, 'Hz') : 'f'}`} symbol="L′" value={r()?.apparentInductance} unit="H" stale={stale()} significant={5}>
-            <Formula html={props.formulas.apparent} source="Terman, Radio Engineers’ Handbook, 1943" validity="Q ≫ 1 and f well below the self-resonant frequency" />
+            <Formula math={props.apparent} source="Terman, Radio Engineers’ Handbook, 1943" validity="Q ≫ 1 and f well below the self-resonant frequency" />
           </ResultRow>
         </Show>
 
         <NoteList notes={r()?.notes ?? []} />
 
-        <Show when={form() === 'solenoid' && r()?.sweep}>
+        <Show when={form() === 'solenoid' && r()?.sweepRange}>
           <Plot
             id="coil-plot"
-            caption={`Q and apparent inductance of this coil from ${formatQuantity(r()!.sweep!.f[0], 'Hz', 3)} to ${formatQuantity(r()!.sweep!.f[r()!.sweep!.f.length - 1], 'Hz', 3)} (90 % of the estimated self-resonance). Dashed: the Q you would measure across the coil, lowered by its self-capacitance. Above half the self-resonant frequency the lumped model is only a rough guide.`}
+            caption={`Q and apparent inductance of this coil from ${formatQuantity(r()!.sweepRange![0], 'Hz', 3)} to ${formatQuantity(r()!.sweepRange![1], 'Hz', 3)} (90 % of the estimated self-resonance). Dashed: the Q you would measure across the coil, lowered by its self-capacitance. Above half the self-resonant frequency the lumped model is only a rough guide.`}
             x={r()!.sweep!.f}
             xLabel="Frequency"
             xLog
@@ -617,7 +626,7 @@ export default function CoilBench(props: { formulas: CoilFormulas }) {
         </Show>
 
         <section class="tw-table-block tw-coil-handoff" aria-labelledby="handoff-title">
-          <h3 id="handoff-title">Next: the tank</h3>
+          <h2 id="handoff-title">Next: the tank</h2>
           <Show when={handOff()} fallback={<p>Complete the inputs to carry this coil to the tank bench.</p>}>
             <p>
               <a id="to-tank" href={handOff()}>Use this coil in the tank bench</a>{' '}

@@ -9,7 +9,7 @@
  * L (inductance text), coilQ (plain number), Cself (capacitance text),
  * f (frequency text, where the Q was worked out).
  */
-import { createMemo, createSignal, Show } from 'solid-js';
+import { createMemo, createSignal, Show, type JSX } from 'solid-js';
 import {
   analyzeTank, seriesToParallelResistance, sweepTank, tankNetlist, tankStress,
   type DesignNote, type TankInput, type TankMode, type TankStressInput,
@@ -29,22 +29,10 @@ import { ResultRow } from '../kit/ResultRow';
 import { useUrlState } from '../kit/useUrlState';
 import type { UrlSchema } from '../kit/urlState';
 
-export interface TankFormulas {
-  frequency: string;
-  unloadedQ: string;
-  loadedQParallel: string;
-  loadedQSeries: string;
-  bandwidth: string;
-  dynamicParallel: string;
-  dynamicSeries: string;
-  coilQ: string;
-  capacitorQ: string;
-  insertionLoss: string;
-  capVoltageParallel: string;
-  capVoltageSeries: string;
-  circulatingParallel: string;
-  circulatingSeries: string;
-}
+export type TankFormulaKey =
+  | 'frequency' | 'unloadedQ' | 'loadedQParallel' | 'loadedQSeries' | 'bandwidth' | 'dynamicParallel' | 'dynamicSeries' | 'coilQ' | 'capacitorQ' | 'insertionLoss' | 'capVoltageParallel' | 'capVoltageSeries' | 'circulatingParallel' | 'circulatingSeries';
+/** The page's typeset formulas, handed over as slots of the island (see kit/Formula). */
+export type TankFormulas = Record<TankFormulaKey, JSX.Element>;
 
 type CoilLoss = 'Q' | 'R';
 type CapLoss = 'Q' | 'ESR' | 'DF';
@@ -123,7 +111,7 @@ function relative(x: number): string {
   return a >= 1e-4 ? `${(a * 100).toPrecision(2)} %` : `${Number((a * 1e6).toPrecision(2))} ppm`;
 }
 
-export default function TankBench(props: { formulas: TankFormulas }) {
+export default function TankBench(props: TankFormulas) {
   const [mode, setMode] = createSignal<TankMode>('parallel');
   const [coilLoss, setCoilLoss] = createSignal<CoilLoss>('Q');
   const [capLoss, setCapLoss] = createSignal<CapLoss>('Q');
@@ -384,7 +372,7 @@ export default function TankBench(props: { formulas: TankFormulas }) {
 
       <div class="tw-bench-results" aria-live="polite">
         <ResultRow id="out-f" label={shownMode() === 'parallel' ? 'Resonant frequency (|Z| peak)' : 'Resonant frequency (|Z| dip)'} symbol="f" value={a()?.resonantFrequency} unit="Hz" significant={6} stale={stale()} primary>
-          <Formula html={props.formulas.frequency} source="Thomson's formula; Terman 1943" validity="peak found from the impedance itself; lumped model, f well below the coil's self-resonance" />
+          <Formula math={props.frequency} source="Thomson's formula; Terman 1943" validity="peak found from the impedance itself; lumped model, f well below the coil's self-resonance" />
           <Show when={a()}>
             <p class="tw-formula-meta" id="out-f-detail">
               Lossless f₀ = {fmtF(a()!.naturalFrequency)}; the {shownMode() === 'parallel' ? 'peak' : 'dip'} is {relative((a()!.resonantFrequency - a()!.naturalFrequency) / a()!.naturalFrequency)} {a()!.resonantFrequency < a()!.naturalFrequency ? 'below' : 'above'} it
@@ -394,39 +382,39 @@ export default function TankBench(props: { formulas: TankFormulas }) {
           </Show>
         </ResultRow>
         <ResultRow id="out-qu" label="Unloaded Q (coil and capacitor)" symbol="Qᵤ" value={a()?.unloadedQ} stale={stale()}>
-          <Formula html={props.formulas.unloadedQ} source="Pozar, Microwave Engineering" validity="losses add; with Cₛ the capacitor's share is weighted by C/(C + Cₛ)" />
+          <Formula math={props.unloadedQ} source="Pozar, Microwave Engineering" validity="losses add; with Cₛ the capacitor's share is weighted by C/(C + Cₛ)" />
         </ResultRow>
         <ResultRow id="out-ql" label="Loaded Q (with source and load)" value={a()?.loadedQ} stale={stale()} primary>
-          <Formula html={shownMode() === 'parallel' ? props.formulas.loadedQParallel : props.formulas.loadedQSeries} source="Pozar, Microwave Engineering" validity={`external Q here ${a() && Number.isFinite(a()!.externalQ) ? a()!.externalQ.toPrecision(4) : '∞ (no source or load resistance)'}`} />
+          <Formula math={shownMode() === 'parallel' ? props.loadedQParallel : props.loadedQSeries} source="Pozar, Microwave Engineering" validity={`external Q here ${a() && Number.isFinite(a()!.externalQ) ? a()!.externalQ.toPrecision(4) : '∞ (no source or load resistance)'}`} />
         </ResultRow>
         <ResultRow id="out-bw" label="Bandwidth (−3 dB, loaded)" symbol="B" value={a()?.bandwidth} unit="Hz" stale={stale()} primary>
-          <Formula html={props.formulas.bandwidth} source="Terman 1943" validity="the value shown is the exact −3 dB width of the computed response; f/Q_L agrees to about 1/Q_L²" />
+          <Formula math={props.bandwidth} source="Terman 1943" validity="the value shown is the exact −3 dB width of the computed response; f/Q_L agrees to about 1/Q_L²" />
           <Show when={r()?.edges.lower !== undefined && r()?.edges.upper !== undefined}>
             <p class="tw-formula-meta" id="out-bw-edges">−3 dB points: {fmtF(r()!.edges.lower!)} and {fmtF(r()!.edges.upper!)}. Unloaded bandwidth {formatQuantity(a()!.unloadedBandwidth, 'Hz', 4)}.</p>
           </Show>
         </ResultRow>
         <ResultRow id="out-rd" label={shownMode() === 'parallel' ? 'Dynamic resistance (tank alone, at its peak)' : 'Resistance at resonance (tank alone)'} value={a()?.dynamicResistance} unit="Ω" stale={stale()}>
-          <Formula html={shownMode() === 'parallel' ? props.formulas.dynamicParallel : props.formulas.dynamicSeries} source="Terman 1943" validity={`shown: |Z| computed at the ${shownMode() === 'parallel' ? 'peak' : 'dip'}; the rule agrees for Q above about 10`} />
+          <Formula math={shownMode() === 'parallel' ? props.dynamicParallel : props.dynamicSeries} source="Terman 1943" validity={`shown: |Z| computed at the ${shownMode() === 'parallel' ? 'peak' : 'dip'}; the rule agrees for Q above about 10`} />
           <Show when={a()}>
             <p class="tw-formula-meta">With source and load: |Z| = {formatQuantity(a()!.loadedImpedance, 'Ω', 4)} at the loaded peak.</p>
           </Show>
         </ResultRow>
         <div class="tank-pair">
           <ResultRow id="out-qcoil" label="Coil Q at f₀" value={a()?.coilQ} stale={stale()}>
-            <Formula html={props.formulas.coilQ} source="definition of Q" />
+            <Formula math={props.coilQ} source="definition of Q" />
             <Show when={a()}>
               <p class="tw-formula-meta">Series R {formatQuantity(a()!.coilResistance, 'Ω', 4)}{Number.isFinite(r()?.coilParallelR ?? Infinity) ? `, as a parallel resistance ${formatQuantity(r()!.coilParallelR, 'Ω', 4)}` : ''}.</p>
             </Show>
           </ResultRow>
           <ResultRow id="out-qcap" label="Capacitor Q at f₀" value={a()?.capacitorQ} stale={stale()}>
-            <Formula html={props.formulas.capacitorQ} source="definition of Q and tan δ" />
+            <Formula math={props.capacitorQ} source="definition of Q and tan δ" />
             <Show when={a()}>
               <p class="tw-formula-meta">ESR {formatQuantity(a()!.capacitorEsr, 'Ω', 4)}.</p>
             </Show>
           </ResultRow>
         </div>
         <ResultRow id="out-il" label="Insertion loss as a single-resonator filter, dB" value={a()?.insertionLoss} significant={3} stale={stale()}>
-          <Formula html={props.formulas.insertionLoss} source="common practice; derived on the method page" validity="equal source and load resistances, near resonance" />
+          <Formula math={props.insertionLoss} source="common practice; derived on the method page" validity="equal source and load resistances, near resonance" />
           <Show when={a()} >
             <p class="tw-formula-meta">
               {a()!.insertionLoss === undefined
@@ -436,18 +424,18 @@ export default function TankBench(props: { formulas: TankFormulas }) {
           </Show>
         </ResultRow>
 
-        <h3 class="tank-heading">Voltages and currents at resonance</h3>
+        <h2 class="tank-heading">Voltages and currents at resonance</h2>
         <Show when={!driveBlank()} fallback={<p class="tw-table-note">Give the drive (voltage or power) to see the capacitor voltage and the circulating current.</p>}>
           <div class="tank-stack">
             <ResultRow id="out-vc" label="Capacitor voltage, RMS" value={s()?.capacitorVoltage} unit="V" stale={stressStale()}>
-              <Formula html={shownMode() === 'parallel' ? props.formulas.capVoltageParallel : props.formulas.capVoltageSeries} source="circuit algebra at resonance" />
+              <Formula math={shownMode() === 'parallel' ? props.capVoltageParallel : props.capVoltageSeries} source="circuit algebra at resonance" />
             </ResultRow>
             <ResultRow id="out-vcpk" label="Capacitor voltage, peak" value={s()?.capacitorVoltagePeak} unit="V" stale={stressStale()}>
               <p class="tw-formula-meta">√2 × RMS for a sine; compare with the capacitor's rating.</p>
             </ResultRow>
           </div>
           <ResultRow id="out-icirc" label="Circulating current (in the coil), RMS" value={s()?.circulatingCurrent} unit="A" stale={stressStale()}>
-            <Formula html={shownMode() === 'parallel' ? props.formulas.circulatingParallel : props.formulas.circulatingSeries} source="circuit algebra at resonance" />
+            <Formula math={shownMode() === 'parallel' ? props.circulatingParallel : props.circulatingSeries} source="circuit algebra at resonance" />
             <Show when={s()}>
               <p class="tw-formula-meta">Drive {formatQuantity(s()!.driveVoltage, 'V', 4)} RMS, {formatQuantity(s()!.power, 'W', 4)}, line current {formatQuantity(s()!.lineCurrent, 'A', 4)} at {fmtF(s()!.frequency)}.</p>
             </Show>

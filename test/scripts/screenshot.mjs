@@ -40,6 +40,8 @@ for (const route of routes) {
     await page.waitForTimeout(60);
   }
   await page.evaluate(() => window.scrollTo(0, 0));
+  // A full-page picture is taken without scrolling: draw what content-visibility leaves for later.
+  await page.addStyleTag({ content: '* { content-visibility: visible !important; }' });
   await page.waitForTimeout(400);
   const file = join(out, `${route.replace(/[^a-z0-9]+/gi, '_').replace(/^_|_$/g, '') || 'home'}${phone ? `-${width}` : ''}${dark ? '-dark' : ''}.png`);
   await page.screenshot({ path: file, fullPage: true });

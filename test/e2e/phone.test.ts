@@ -1,0 +1,77 @@
+/**
+ * Phone: every built page at 390 × 844 (a common phone's CSS viewport) is no
+ * wider than the screen, also after scrolling to the end (plots build when
+ * they come into view). A formula wider than the screen scrolls inside its
+ * own box instead. The 390 px width: common practice, no published source.
+ */
+import { readdirSync, statSync } from 'node:fs';
+import { join, relative } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { browserAvailable, DIST, hydrated, useSiteAndBrowser } from './harness';
+
+const PHONE = { width: 390, height: 844 };
+
+function routes(dir = DIST, out: string[] = []): string[] {
+  for (const name of readdirSync(dir)) {
+    const p = join(dir, name);
+    if (statSync(p).isDirectory()) routes(p, out);
+    else if (name === 'index.html') out.push(dir === DIST ? '/' : `/${relative(DIST, dir).split('\\').join('/')}/`);
+  }
+  return out.sort();
+}
+
+/** Scrolls to the end in steps (so what builds on coming into view is built), then back to the top. */
+async function scrollThrough(page: Page): Promise<void> {
+  const height = await page.evaluate(() => document.documentElement.scrollHeight);
+  for (let y = 0; y < height; y += PHONE.height / 2) {
+    await page.evaluate((top) => window.scrollTo(0, top), y);
+    await page.waitForTimeout(30);
+  }
+  await page.evaluate(() => window.scrollTo(0, 0));
+}
+
+describe.runIf(browserAvailable())('pages on a 390 px phone', () => {
+  const env = useSiteAndBrowser();
+  const pages = browserAvailable() ? routes() : [];
+
+  it('finds the built pages', () => {
+    expect(pages).toEqual(expect.arrayContaining(['/', '/resonance/', '/coil/', '/tank/']));
+  });
+
+  it.each(pages)('%s is no wider than the screen', async (route) => {
+    const context = await env.browser.newContext({ viewport: PHONE, isMobile: true, hasTouch: true });
+    const page = await context.newPage();
+    await page.goto(env.site.origin + route, { waitUntil: 'networkidle' });
+    await hydrated(page);
+    await scrollThrough(page);
+    const width = await page.evaluate(() => document.scrollingElement!.scrollWidth);
+    const wide = await page.evaluate((limit) => [...document.querySelectorAll('body *')]
+      .filter((el) => el.getBoundingClientRect().right > limit + 1 && !el.closest('.tw-formula-math, .katex, .tw-math-block, .tw-plot-keys-wrap'))
+      .slice(0, 5).map((el) => `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} → ${Math.round(el.getBoundingClientRect().right)} px`), PHONE.width);
+    expect(width, `wider than the screen: ${wide.join('; ')}`).toBeLessThanOrEqual(PHONE.width);
+    await context.close();
+  });
+
+  it('a formula wider than the screen scrolls inside its own box', async () => {
+    const context = await env.browser.newContext({ viewport: PHONE, isMobile: true, hasTouch: true });
+    const page = await context.newPage();
+    await page.goto(`${env.site.origin}/coil/`, { waitUntil: 'networkidle' });
+    await hydrated(page);
+    const boxes = await page.evaluate(() => [...document.querySelectorAll('.tw-formula-math')].map((el) => ({
+      overflows: el.scrollWidth > el.clientWidth + 1,
+      scrolls: getComputedStyle(el).overflowX === 'auto',
+      // the cue: shadows at the edges (backgrounds that stay while the covers scroll with the content)
+      cue: /radial-gradient/.test(getComputedStyle(el).backgroundImage) && /local/.test(getComputedStyle(el).backgroundAttachment),
+      right: el.getBoundingClientRect().right,
+    })));
+    // The AC resistance formula is wider than a phone: it must scroll inside its box, which stays on screen.
+    expect(boxes.some((b) => b.overflows)).toBe(true);
+    for (const b of boxes) {
+      expect(b.scrolls).toBe(true);
+      expect(b.cue).toBe(true);
+      expect(b.right).toBeLessThanOrEqual(PHONE.width);
+    }
+    await context.close();
+  });
+});
