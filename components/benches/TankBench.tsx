@@ -1,81 +1,52 @@
 /**
  * Tank bench: a lossy parallel or series LC tank between a source and a load.
- * Resonance, unloaded and loaded Q, bandwidth, dynamic resistance, insertion
- * loss as a single-resonator filter, capacitor voltage and circulating
- * current with cautions; |Z|, phase and the loaded response plotted from a
- * 1,000-point sweep; the SPICE netlist and the sweep offered as files.
+ * The answer first (resonance, loaded Q, bandwidth, dynamic resistance, and
+ * the transducer loss from source to load when both are given), then the
+ * detailed cards with their formulas; a prominent note when the terminations
+ * collapse the tank; capacitor voltage and circulating current with cautions
+ * once a drive is given (the section is closed until then); |Z|, phase and
+ * the loaded response plotted from a 1,000-point sweep; the SPICE netlist and
+ * the sweep offered as files.
  *
- * Accepts a coil handed over from the Coil bench in the query string:
- * L (inductance text), coilQ (plain number), Cself (capacitance text),
- * f (frequency text, where the Q was worked out).
+ * The bench is its field table (TANK_FIELDS in tankFields.ts): the link, the
+ * fields in use and where a core error is shown all come from it. The one
+ * addition to the link is `coil`: the Coil bench's own link query, carried by
+ * a coil handed over, read with the Coil bench's table and offered back as
+ * "Back to the coil".
  */
 import { createMemo, createSignal, Show, type JSX } from 'solid-js';
-import {
-  analyzeTank, seriesToParallelResistance, sweepTank, tankNetlist, tankStress,
-  type DesignNote, type TankInput, type TankMode, type TankStressInput,
-} from '../../src/core';
-import { formatQuantity } from '../../src/quantity';
-import { createComputation } from '../kit/compute';
+// Core modules imported one by one, not through the index: the page then ships only these.
+import type { DesignNote } from '../../src/core/notes';
+import { tankNetlist } from '../../src/core/netlist';
+import { seriesToParallelResistance } from '../../src/core/qRules';
+import { analyzeTank, type TankAnalysis } from '../../src/core/tank';
+import { tankStress } from '../../src/core/tankStress';
+import { sweepTank } from '../../src/core/tankSweep';
+import { formatNumber, formatQuantity } from '../../src/quantity';
+import { createBenchState } from '../kit/bench';
+import { createUrlState } from '../kit/createUrlState';
+import { Field } from '../kit/Field';
+import { formatShift } from '../kit/format';
 import { Formula } from '../kit/Formula';
-import { NoteList } from '../kit/Note';
-import { createNumber } from '../kit/numberState';
-import { createOptionalQuantity } from '../kit/optionalQuantity';
-import { Plot } from '../kit/Plot';
-import { Choice } from '../kit/Choice';
 import { LinkNotices } from '../kit/LinkNotices';
-import { QuantityField } from '../kit/QuantityField';
-import { createQuantity } from '../kit/quantityState';
+import { NoteList } from '../kit/Note';
+import { Plot } from '../kit/Plot';
 import { ResultRow } from '../kit/ResultRow';
-import { useUrlState } from '../kit/useUrlState';
-import type { UrlSchema } from '../kit/urlState';
+import { Summary, type SummaryItem } from '../kit/Summary';
+import { COIL_FIELDS } from './coilFields';
+import {
+  collapseNoteOf, DRIVE_KEYS, handOffGreeting, readCoilLink, splitCoilLink, stressOf, sweepSpan, SWEEP_POINTS, TANK_FIELDS,
+  tankOf, withCoilLink, type TankSpec,
+} from './tankFields';
 
 export type TankFormulaKey =
-  | 'frequency' | 'unloadedQ' | 'loadedQParallel' | 'loadedQSeries' | 'bandwidth' | 'dynamicParallel' | 'dynamicSeries' | 'coilQ' | 'capacitorQ' | 'insertionLoss' | 'capVoltageParallel' | 'capVoltageSeries' | 'circulatingParallel' | 'circulatingSeries';
+  | 'frequency' | 'unloadedQ' | 'loadedQParallel' | 'loadedQSeries' | 'bandwidth' | 'dynamicParallel' | 'dynamicSeries' | 'coilQ'
+  | 'capacitorQ' | 'transducerLoss' | 'insertionLoss' | 'capVoltageParallel' | 'capVoltageSeries' | 'circulatingParallel' | 'circulatingSeries';
 /** The page's typeset formulas, handed over as slots of the island (see kit/Formula). */
 export type TankFormulas = Record<TankFormulaKey, JSX.Element>;
 
-type CoilLoss = 'Q' | 'R';
-type CapLoss = 'Q' | 'ESR' | 'DF';
-type Drive = 'P' | 'V';
-
-export const TANK_SCHEMA: UrlSchema = {
-  mode: { kind: 'choice', options: ['parallel', 'series'], label: 'tank' },
-  L: { kind: 'quantity', unit: 'H', label: 'inductance' },
-  coilLoss: { kind: 'choice', options: ['Q', 'R'], label: 'coil loss given as' },
-  coilQ: { kind: 'number', label: 'coil Q' },
-  Rcoil: { kind: 'quantity', unit: 'Ω', label: 'coil resistance' },
-  Cself: { kind: 'quantity', unit: 'F', label: 'coil self-capacitance' },
-  C: { kind: 'quantity', unit: 'F', label: 'capacitance' },
-  capLoss: { kind: 'choice', options: ['Q', 'ESR', 'DF'], label: 'capacitor loss given as' },
-  capQ: { kind: 'number', label: 'capacitor Q' },
-  ESR: { kind: 'quantity', unit: 'Ω', label: 'capacitor ESR' },
-  DF: { kind: 'number', label: 'dissipation factor' },
-  Rs: { kind: 'quantity', unit: 'Ω', label: 'source resistance' },
-  Rload: { kind: 'quantity', unit: 'Ω', label: 'load resistance' },
-  f: { kind: 'quantity', unit: 'Hz', label: 'frequency of the Q figures' },
-  drive: { kind: 'choice', options: ['P', 'V'], label: 'drive given as' },
-  P: { kind: 'quantity', unit: 'W', label: 'drive power' },
-  V: { kind: 'quantity', unit: 'V', label: 'drive voltage' },
-  Vrating: { kind: 'quantity', unit: 'V', label: 'capacitor voltage rating' },
-  Irating: { kind: 'quantity', unit: 'A', label: 'wire current rating' },
-};
-
-/** Keys a Coil bench link carries; a link with these and no capacitance is a hand-over. */
-const HANDOFF_KEYS = ['L', 'coilQ', 'Cself', 'f'] as const;
-
-/** Demo terminations: a parallel tank between high resistances, a series tank between low ones. */
-const DEFAULT_TERMINATION: Record<TankMode, string> = { parallel: '10 kΩ', series: '5 Ω' };
-
-/** Points in the plotted and downloadable sweep. */
-export const SWEEP_POINTS = 1000;
-
-/** −3 dB as a power ratio of one half, in dB. */
-
-/** Sweep span around the loaded peak: ± about 6 bandwidths, log spaced, at most a decade each way. */
-function sweepSpan(centre: number, bandwidth: number): { start: number; stop: number } {
-  const s = Math.min(1 + (6 * bandwidth) / centre, 10);
-  return { start: centre / s, stop: centre * s };
-}
+/** Where the method page explains the collapse and the remedies (a tap, a link winding, a capacitive divider). */
+const MATCHING_HREF = '/methods/tank/#when-the-terminations-collapse-the-tank';
 
 /** A number for a CSV cell: 10 significant figures, no exponent surprises for spreadsheets. */
 function cell(x: number): string {
@@ -105,174 +76,101 @@ function tick(unit: string, significant: number) {
   return (x: number | null): string => (x == null || !Number.isFinite(x) ? '' : formatQuantity(x, unit, significant).replace(/(\.\d*?)0+(?= )/, '$1').replace(/\.(?= )/, ''));
 }
 
-/** A small relative offset for people: per cent, or ppm below 0.01 %. */
-function relative(x: number): string {
-  const a = Math.abs(x);
-  return a >= 1e-4 ? `${(a * 100).toPrecision(2)} %` : `${Number((a * 1e6).toPrecision(2))} ppm`;
+const fmtF = (x: number) => formatQuantity(x, 'Hz', 4);
+const fmtDb = (x: number) => `${formatNumber(x, 3)} dB`;
+/** Plot readouts: the response to 0.01 dB ("0.00 dB" at the peak, not "−0.000004813 dB"), the phase to 0.1°. */
+const fmtResponse = (y: number) => `${(Math.round(y * 100) / 100 || 0).toFixed(2).replace('-', '−')} dB`;
+const fmtDeg = (y: number) => `${(Math.round(y * 10) / 10 || 0).toFixed(1).replace('-', '−')}°`;
+const fmtQ = (x: number) => (Number.isFinite(x) ? formatNumber(x, 4) : '∞ (ideal parts)');
+
+/** The answer first: resonance, loaded Q, bandwidth, dynamic resistance; the transducer loss when source and load are both given. */
+function summaryItems(a: TankAnalysis): SummaryItem[] {
+  const parallel = a.mode === 'parallel';
+  const shift = formatShift(a.resonantFrequency / a.naturalFrequency - 1);
+  const loadedShift = formatShift(a.loadedResonantFrequency / a.resonantFrequency - 1);
+  const resonance = [
+    shift ? `${shift} from the lossless f₀ ${fmtF(a.naturalFrequency)}` : 'at the lossless f₀ (within 0.1 %)',
+    loadedShift ? `loaded: ${fmtF(a.loadedResonantFrequency)}` : null,
+  ].filter(Boolean).join('; ');
+  const items: SummaryItem[] = [
+    { id: 'sum-f', label: parallel ? 'Resonance (|Z| peak)' : 'Resonance (|Z| dip)', symbol: 'f', value: a.resonantFrequency, unit: 'Hz', main: true, detail: resonance },
+    { id: 'sum-ql', label: 'Loaded Q', value: a.loadedQ, detail: `unloaded ${fmtQ(a.unloadedQ)}` },
+    { id: 'sum-bw', label: 'Bandwidth, −3 dB', symbol: 'B', value: a.bandwidth, unit: 'Hz', detail: `${fmtF(a.lowerFrequency)} to ${fmtF(a.upperFrequency)}` },
+    {
+      id: 'sum-rd', label: parallel ? 'Dynamic resistance' : 'Resistance at resonance', value: a.dynamicResistance, unit: 'Ω',
+      text: Number.isFinite(a.dynamicResistance) ? undefined : '∞', detail: parallel ? 'the tank alone, at its peak' : 'the tank alone',
+    },
+  ];
+  if (a.transducerLoss !== undefined) {
+    items.push({ id: 'sum-tl', label: 'Transducer loss', value: a.transducerLoss, text: fmtDb(a.transducerLoss), detail: 'source to load, at resonance' });
+  }
+  return items;
 }
 
 export default function TankBench(props: TankFormulas) {
-  const [mode, setMode] = createSignal<TankMode>('parallel');
-  const [coilLoss, setCoilLoss] = createSignal<CoilLoss>('Q');
-  const [capLoss, setCapLoss] = createSignal<CapLoss>('Q');
-  const [drive, setDrive] = createSignal<Drive>('V');
-  const [handoff, setHandoff] = createSignal<string | null>(null);
+  const bench = createBenchState<TankSpec>(TANK_FIELDS);
+  /** A coil handed over: its link query (written again by its table) and the greeting. */
+  const [coil, setCoil] = createSignal<{ query: string; greeting: string } | null>(null);
+  const [driveOpen, setDriveOpen] = createSignal(false);
 
-  const L = createQuantity('H', '4.7 µH');
-  const coilQ = createNumber('150', { what: 'Coil Q' });
-  const Rcoil = createQuantity('Ω', '1.4 Ω');
-  const Cself = createOptionalQuantity('F', '');
-  const C = createQuantity('F', '100 pF');
-  const capQ = createNumber('1000', { what: 'Capacitor Q' });
-  const ESR = createQuantity('Ω', '20 mΩ');
-  const DF = createNumber('0.001', { what: 'Dissipation factor' });
-  const Rs = createOptionalQuantity('Ω', DEFAULT_TERMINATION.parallel);
-  const Rload = createOptionalQuantity('Ω', DEFAULT_TERMINATION.parallel);
-  /** Switching the tank swaps terminations still at the other tank's default for this one's. */
-  const switchMode = (next: TankMode) => {
-    for (const q of [Rs, Rload]) if (q.text() === DEFAULT_TERMINATION[mode()]) q.setText(DEFAULT_TERMINATION[next]);
-    setMode(next);
-  };
-  const f = createOptionalQuantity('Hz', '');
-  const P = createOptionalQuantity('W', '');
-  const V = createOptionalQuantity('V', '1 V');
-  const Vrating = createOptionalQuantity('V', '500 V');
-  const Irating = createOptionalQuantity('A', '');
-
-  const notices = useUrlState(
-    TANK_SCHEMA,
-    () => {
-      const v: Record<string, string> = { mode: mode(), L: L.text(), coilLoss: coilLoss(), Cself: Cself.text(), C: C.text(), capLoss: capLoss() };
-      if (coilLoss() === 'Q') v.coilQ = coilQ.text(); else v.Rcoil = Rcoil.text();
-      if (capLoss() === 'Q') v.capQ = capQ.text(); else if (capLoss() === 'ESR') v.ESR = ESR.text(); else v.DF = DF.text();
-      Object.assign(v, { Rs: Rs.text(), Rload: Rload.text(), f: f.text(), drive: drive() });
-      if (drive() === 'P') v.P = P.text(); else v.V = V.text();
-      Object.assign(v, { Vrating: Vrating.text(), Irating: Irating.text() });
-      return v;
-    },
-    (v) => {
-      if (v.mode) setMode(v.mode as TankMode);
-      const texts: Record<string, { setText(t: string): void }> = { L, coilQ, Rcoil, Cself, C, capQ, ESR, DF, Rs, Rload, f, P, V, Vrating, Irating };
-      for (const [key, state] of Object.entries(texts)) if (v[key] !== undefined) state.setText(v[key]);
-      // A loss or drive given without its choice picks that choice.
-      if (v.coilLoss) setCoilLoss(v.coilLoss as CoilLoss);
-      else if (v.coilQ !== undefined) setCoilLoss('Q');
-      else if (v.Rcoil !== undefined) setCoilLoss('R');
-      if (v.capLoss) setCapLoss(v.capLoss as CapLoss);
-      else if (v.capQ !== undefined) setCapLoss('Q');
-      else if (v.ESR !== undefined) setCapLoss('ESR');
-      else if (v.DF !== undefined) setCapLoss('DF');
-      if (v.drive) setDrive(v.drive as Drive);
-      else if (v.P !== undefined) setDrive('P');
-      else if (v.V !== undefined) setDrive('V');
-      const given = HANDOFF_KEYS.filter((k) => v[k] !== undefined);
-      if (given.length > 0 && v.C === undefined && v.mode === undefined) {
-        const parts = [
-          v.L !== undefined ? `L = ${v.L}` : null,
-          v.coilQ !== undefined ? `Q = ${v.coilQ}${v.f !== undefined ? ` at ${v.f}` : ''}` : null,
-          v.Cself !== undefined ? `self-capacitance ${v.Cself}` : null,
-        ].filter(Boolean);
-        setHandoff(`Coil from the Coil bench: ${parts.join(', ') || `frequency ${v.f}`}. Set the capacitor, source and load to complete the tank.`);
+  const notices = createUrlState({
+    readLink(search) {
+      const { rest, coil: coilText } = splitCoilLink(search);
+      const d = bench.readLink(rest);
+      const out = [...d.notices];
+      if (coilText !== undefined) {
+        const r = readCoilLink(COIL_FIELDS, coilText);
+        if ('notice' in r) out.push(r.notice);
+        else setCoil({ query: r.query, greeting: handOffGreeting(d.texts) });
       }
+      // A link that carries a drive or a rating opens the section that holds them.
+      if (DRIVE_KEYS.some((k) => (d.texts[k] ?? '') !== '')) setDriveOpen(true);
+      return { notices: out };
     },
-  );
-
-  /** Bench field for a core argument name. */
-  const fieldOf = (core: string): string | undefined => ({
-    inductance: 'L',
-    capacitance: 'C',
-    coilResistance: coilLoss() === 'Q' ? 'coilQ' : 'Rcoil',
-    coilQ: 'coilQ',
-    capacitorEsr: capLoss() === 'Q' ? 'capQ' : capLoss() === 'ESR' ? 'ESR' : 'DF',
-    capacitorQ: 'capQ',
-    dissipationFactor: 'DF',
-    coilSelfCapacitance: 'Cself',
-    sourceResistance: 'Rs',
-    loadResistance: 'Rload',
-    frequency: 'f',
-    drivePower: 'P',
-    driveVoltage: 'V',
-    capacitorVoltageRating: 'Vrating',
-    wireCurrentRating: 'Irating',
-  } as Record<string, string>)[core];
-  const CORE_FIELDS = ['inductance', 'capacitance', 'coilResistance', 'coilQ', 'capacitorEsr', 'capacitorQ', 'dissipationFactor', 'coilSelfCapacitance', 'sourceResistance', 'loadResistance', 'frequency', 'drivePower', 'driveVoltage', 'capacitorVoltageRating', 'wireCurrentRating'];
-
-  /** The tank as the core takes it, or undefined while an input shown is not a value. */
-  const tankInput = createMemo((): TankInput | undefined => {
-    const coil = coilLoss() === 'Q' ? coilQ : Rcoil;
-    const cap = capLoss() === 'Q' ? capQ : capLoss() === 'ESR' ? ESR : DF;
-    const all = [L, coil, Cself, C, cap, Rs, Rload, f];
-    if (all.some((q) => q.stale())) return undefined;
-    const Lv = L.value(), Cv = C.value();
-    if (Lv === undefined || Cv === undefined) return undefined;
-    const t: TankInput = { mode: mode(), inductance: Lv, capacitance: Cv };
-    if (coilLoss() === 'Q') t.coilQ = coilQ.value(); else t.coilResistance = Rcoil.value();
-    if (capLoss() === 'Q') t.capacitorQ = capQ.value();
-    else if (capLoss() === 'ESR') t.capacitorEsr = ESR.value();
-    else t.dissipationFactor = DF.value();
-    if (Cself.value() !== undefined) t.coilSelfCapacitance = Cself.value();
-    if (Rs.value() !== undefined) t.sourceResistance = Rs.value();
-    if (Rload.value() !== undefined) t.loadResistance = Rload.value();
-    if (f.value() !== undefined) t.frequency = f.value();
-    for (const k of Object.keys(t) as (keyof TankInput)[]) if (t[k] === undefined) delete t[k];
-    return t;
+    linkQuery: () => withCoilLink(bench.linkQuery(), coil()?.query),
   });
 
-  const calc = createComputation(() => {
-    const t = tankInput();
-    if (!t) return undefined;
-    const analysis = analyzeTank(t);
-    const span = sweepSpan(analysis.loadedResonantFrequency, analysis.bandwidth);
-    const sweep = sweepTank(t, { ...span, points: SWEEP_POINTS, spacing: 'log' });
-    const w0 = 2 * Math.PI * analysis.naturalFrequency;
-    const x0 = w0 * t.inductance;
+  const calc = bench.compute((spec) => {
+    const tank = tankOf(spec);
+    const analysis = analyzeTank(tank);
+    // Centred on the tank's own peak with an odd number of points: the middle point is the peak itself.
+    const sweep = sweepTank(tank, { ...sweepSpan(analysis.resonantFrequency, analysis.bandwidth), points: SWEEP_POINTS, spacing: 'log' });
+    const x0 = 2 * Math.PI * analysis.naturalFrequency * tank.inductance;
     return {
-      tank: t,
+      tank,
       analysis,
       sweep,
-      edges: { lower: analysis.lowerFrequency, upper: analysis.upperFrequency },
       coilParallelR: analysis.coilResistance > 0 ? seriesToParallelResistance(analysis.coilResistance, x0) : Infinity,
     };
-  }, CORE_FIELDS);
-
-  const stress = createComputation(() => {
-    const t = tankInput();
-    if (!t) return undefined;
-    const driveQ = drive() === 'P' ? P : V;
-    if ([driveQ, Vrating, Irating].some((q) => q.stale())) return undefined;
-    const dv = driveQ.value();
-    if (dv === undefined) return null;
-    const input: TankStressInput = { ...t };
-    if (drive() === 'P') input.drivePower = dv; else input.driveVoltage = dv;
-    if (Vrating.value() !== undefined) input.capacitorVoltageRating = Vrating.value();
-    if (Irating.value() !== undefined) input.wireCurrentRating = Irating.value();
-    return tankStress(input);
-  }, CORE_FIELDS);
-
-  const fieldError = (id: string): string | null => {
-    for (const core of CORE_FIELDS) {
-      if (fieldOf(core) !== id) continue;
-      const msg = calc.fieldError(core) ?? stress.fieldError(core);
-      if (msg) return msg;
-    }
-    return null;
-  };
+  });
+  /** The driven tank's voltages and currents; null while no drive is given. */
+  const stress = bench.compute((spec) => {
+    const driven = stressOf(spec);
+    return driven ? tankStress(driven) : null;
+  });
 
   const r = calc.result;
   const a = () => r()?.analysis;
   const s = () => stress.result() ?? undefined;
   const stale = () => calc.stale();
   const stressStale = () => stress.stale();
-  const driveBlank = () => (drive() === 'P' ? P : V).blank();
-  const parallel = () => mode() === 'parallel';
-  const shownMode = () => a()?.mode ?? mode();
-  const generalError = () => calc.generalError() ?? stress.generalError();
+  const parallel = () => bench.choice('mode') === 'parallel';
+  const shownMode = () => a()?.mode ?? bench.choice('mode');
+  const driveGiven = () => !bench.field(bench.choice('drive') === 'P' ? 'P' : 'V').blank();
+  const ratingsGiven = () => !bench.field('Vrating').blank() || !bench.field('Irating').blank();
+  /** A message at a field of the drive section opens it, so it is never hidden. */
+  const driveTrouble = () => DRIVE_KEYS.some((k) => bench.uses(k) && (bench.field(k).error() !== null || bench.designError(k) !== null));
 
+  const collapse = createMemo(() => {
+    const an = a();
+    return an ? collapseNoteOf(an) : undefined;
+  });
   const notes = createMemo((): DesignNote[] => {
     const seen = new Set<string>();
+    const shown = collapse();
     const out: DesignNote[] = [];
     for (const n of [...(s()?.notes ?? []), ...(a()?.notes ?? [])]) {
-      if (seen.has(n.message)) continue;
+      if (seen.has(n.message) || (shown && n.message === shown.message)) continue;
       seen.add(n.message);
       out.push(n);
     }
@@ -297,108 +195,145 @@ export default function TankBench(props: TankFormulas) {
     offerFile(`tankwright-${res.analysis.mode}-sweep-${fileFrequency(res.analysis.loadedResonantFrequency)}.csv`, rows.join('\n') + '\n', 'text/csv');
   };
 
-  const fmtF = (x: number) => formatQuantity(x, 'Hz', 4);
   /** Log frequency axis only when the sweep spans more than a factor of 3 (low Q). */
   const wide = () => {
     const fr = r()?.sweep.frequency;
     return fr !== undefined && fr[fr.length - 1] / fr[0] > 3;
   };
-  const markers = () => {
-    const e = r()?.edges;
-    const m = [];
-    if (e?.lower !== undefined) m.push({ x: e.lower, label: 'f₁' });
-    if (e?.upper !== undefined) m.push({ x: e.upper, label: 'f₂' });
-    return m;
+  const edges = () => {
+    const an = a();
+    return an ? [{ x: an.lowerFrequency, label: 'f₁' }, { x: an.upperFrequency, label: 'f₂' }] : [];
+  };
+  const unequal = () => {
+    const t = r()?.tank;
+    return t?.sourceResistance !== undefined && t.loadResistance !== undefined && Math.abs(t.sourceResistance - t.loadResistance) > 0.01 * Math.max(t.sourceResistance, t.loadResistance);
+  };
+  /** The resonance card's line: the lossless f₀, and the shifts worth showing (from 0.1 %). */
+  const resonanceDetail = (an: TankAnalysis) => {
+    const word = an.mode === 'parallel' ? 'peak' : 'dip';
+    const shift = formatShift(an.resonantFrequency / an.naturalFrequency - 1);
+    const out = [`Lossless f₀ = ${fmtF(an.naturalFrequency)}; the |Z| ${word} is ${shift ? `${shift} from it` : 'there within 0.1 %'}.`];
+    if (an.zeroPhaseFrequency === undefined) out.push('The impedance is never purely resistive near resonance.');
+    else {
+      const zp = formatShift(an.zeroPhaseFrequency / an.resonantFrequency - 1);
+      if (zp) out.push(`Zero phase at ${fmtF(an.zeroPhaseFrequency)} (${zp} from the ${word}).`);
+    }
+    const loaded = formatShift(an.loadedResonantFrequency / an.resonantFrequency - 1);
+    if (loaded) out.push(`With source and load the ${word} is at ${fmtF(an.loadedResonantFrequency)} (${loaded}).`);
+    return out.join(' ');
   };
 
   return (
     <div class="tw-bench tank-bench" data-bench="tank">
       <LinkNotices notices={notices()} />
-      <Show when={handoff()}>
-        <p class="tank-handoff" role="status" id="handoff">{handoff()}</p>
+      <Show when={coil()}>
+        <p class="tank-handoff" role="status" id="handoff">
+          {coil()!.greeting}{' '}
+          <a id="back-to-coil" href={`/coil/?${coil()!.query}`}>Back to this coil on the Coil bench</a>
+        </p>
       </Show>
       <div class="tw-bench-inputs">
-        <Choice name="mode" legend="Tank" value={mode()} onChoose={switchMode} options={[['parallel', 'Parallel'], ['series', 'Series']]} />
+        <Field bench={bench} name="mode" />
 
         <fieldset class="tank-group">
           <legend>Coil</legend>
-          <QuantityField id="L" label="Inductance" symbol="L" q={L} hint="e.g. 4.7 µH, 4u7, 220n" designError={fieldError('L')} />
-          <Choice class="tank-sub" name="coilLoss" legend="Coil loss given as" value={coilLoss()} onChoose={setCoilLoss} options={[['Q', 'Q'], ['R', 'Series resistance']]} />
-          <Show when={coilLoss() === 'Q'} fallback={
-            <QuantityField id="Rcoil" label="Coil series resistance" symbol="R" q={Rcoil} hint="AC resistance at the working frequency, e.g. 1.4 Ω, 1R4" designError={fieldError('Rcoil')} />
-          }>
-            <QuantityField id="coilQ" label="Coil Q" symbol="Q" q={coilQ} hint="plain number, e.g. 150" designError={fieldError('coilQ')} />
-          </Show>
-          <QuantityField id="Cself" label="Self-capacitance (optional)" symbol="Cₛ" q={Cself} hint="across the coil, e.g. 3 pF; blank: neglected" designError={fieldError('Cself')} />
+          <Field bench={bench} name="L" />
+          <Field bench={bench} name="coilLoss" class="tank-sub" />
+          <Field bench={bench} name="coilQ" />
+          <Field bench={bench} name="Rcoil" />
+          <Field bench={bench} name="Cself" />
         </fieldset>
 
         <fieldset class="tank-group">
           <legend>Capacitor</legend>
-          <QuantityField id="C" label="Capacitance" symbol="C" q={C} hint="e.g. 100 pF, 4n7, 2*47p" designError={fieldError('C')} />
-          <Choice class="tank-sub" name="capLoss" legend="Capacitor loss given as" value={capLoss()} onChoose={setCapLoss} options={[['Q', 'Q'], ['ESR', 'ESR'], ['DF', 'tan δ']]} />
-          <Show when={capLoss() === 'Q'}>
-            <QuantityField id="capQ" label="Capacitor Q" symbol="Q" q={capQ} hint="plain number, e.g. 1000 (NP0/C0G ceramic, mica: 1000 and up)" designError={fieldError('capQ')} />
-          </Show>
-          <Show when={capLoss() === 'ESR'}>
-            <QuantityField id="ESR" label="Equivalent series resistance" q={ESR} hint="e.g. 20 mΩ, 0.02" designError={fieldError('ESR')} />
-          </Show>
-          <Show when={capLoss() === 'DF'}>
-            <QuantityField id="DF" label="Dissipation factor" symbol="tan δ" q={DF} hint="plain number, e.g. 0.001 (= 0.1 %)" designError={fieldError('DF')} />
-          </Show>
+          <Field bench={bench} name="C" />
+          <Field bench={bench} name="capLoss" class="tank-sub" />
+          <Field bench={bench} name="capQ" />
+          <Field bench={bench} name="ESR" />
+          <Field bench={bench} name="DF" />
         </fieldset>
 
         <fieldset class="tank-group">
           <legend>{parallel() ? 'Source and load (across the tank)' : 'Source and load (in series)'}</legend>
-          <QuantityField id="Rs" label="Source resistance (optional)" symbol="Rₛ" q={Rs} hint={parallel() ? 'e.g. 10k; blank: ideal current source' : 'e.g. 50 Ω; blank: ideal voltage source'} designError={fieldError('Rs')} />
-          <QuantityField id="Rload" label="Load resistance (optional)" q={Rload} hint={parallel() ? 'e.g. 10k; blank: no load' : 'e.g. 50 Ω; blank: no load'} designError={fieldError('Rload')} />
-          <QuantityField id="f" label="Frequency of the Q figures (optional)" symbol="f" q={f} hint="where the Q, ESR or tan δ were measured; blank: at resonance" designError={fieldError('f')} />
+          <Field bench={bench} name="Rs" />
+          <Field bench={bench} name="Rload" />
+          <Field bench={bench} name="f" />
         </fieldset>
 
-        <fieldset class="tank-group">
-          <legend>Drive and ratings</legend>
-          <Choice class="tank-sub" name="drive" legend="Drive given as" value={drive()} onChoose={setDrive} options={[['V', 'Voltage'], ['P', 'Power']]} />
-          <Show when={drive() === 'V'} fallback={
-            <QuantityField id="P" label="RF power into tank and load (optional)" symbol="P" q={P} hint="e.g. 5 W, 100m; blank: no stress figures" designError={fieldError('P')} />
-          }>
-            <QuantityField id="V" label={parallel() ? 'RMS voltage across the tank (optional)' : 'RMS voltage across the circuit (optional)'} symbol="V" q={V} hint="e.g. 1 V, 250m; blank: no stress figures" designError={fieldError('V')} />
-          </Show>
-          <QuantityField id="Vrating" label="Capacitor voltage rating (optional)" q={Vrating} hint="peak volts, derated for RF as the maker says" designError={fieldError('Vrating')} />
-          <QuantityField id="Irating" label="Wire current rating (optional)" q={Irating} hint="A RMS the coil's wire carries at this frequency" designError={fieldError('Irating')} />
-        </fieldset>
-        <Show when={generalError()}>
-          <p class="tw-bench-error" role="alert">{generalError()}</p>
+        <details class="tank-group tank-drive" id="drive" open={driveOpen() || driveTrouble()} onToggle={(e) => setDriveOpen(e.currentTarget.open)}>
+          <summary>Drive and ratings <span class="tank-optional">(for a driven tank)</span></summary>
+          <div class="tank-drive-body">
+            <p class="tw-field-hint">Receiver work needs none of this. Give the drive to see the capacitor voltage and the circulating current, with cautions.</p>
+            <Field bench={bench} name="drive" class="tank-sub" />
+            <Field bench={bench} name="V" />
+            <Field bench={bench} name="P" />
+            <Field bench={bench} name="Vrating" />
+            <Field bench={bench} name="Irating" />
+          </div>
+        </details>
+        <Show when={bench.generalError()}>
+          <p class="tw-bench-error" role="alert">{bench.generalError()}</p>
         </Show>
       </div>
 
       <div class="tw-bench-results" aria-live="polite">
-        <ResultRow id="out-f" label={shownMode() === 'parallel' ? 'Resonant frequency (|Z| peak)' : 'Resonant frequency (|Z| dip)'} symbol="f" value={a()?.resonantFrequency} unit="Hz" significant={6} stale={stale()} primary>
+        <Show when={a()}>
+          <Summary items={summaryItems(a()!)} stale={stale()} />
+        </Show>
+        <Show when={collapse()}>
+          <section class="tank-collapse" id="collapse" aria-labelledby="collapse-title" classList={{ 'tw-result--stale': stale() }}>
+            <h3 id="collapse-title">A tap or a link winding is needed</h3>
+            <p>{collapse()!.message}</p>
+            <p>More on the method page: <a href={MATCHING_HREF}>when the terminations collapse the tank</a>.</p>
+          </section>
+        </Show>
+        <ResultRow id="out-f" label={shownMode() === 'parallel' ? 'Resonant frequency (|Z| peak)' : 'Resonant frequency (|Z| dip)'} symbol="f" value={a()?.resonantFrequency} unit="Hz" stale={stale()} primary>
           <Formula math={props.frequency} source="Thomson's formula; Terman 1943" validity="peak found from the impedance itself; lumped model, f well below the coil's self-resonance" />
           <Show when={a()}>
-            <p class="tw-formula-meta" id="out-f-detail">
-              Lossless f₀ = {fmtF(a()!.naturalFrequency)}; the {shownMode() === 'parallel' ? 'peak' : 'dip'} is {relative((a()!.resonantFrequency - a()!.naturalFrequency) / a()!.naturalFrequency)} {a()!.resonantFrequency < a()!.naturalFrequency ? 'below' : 'above'} it
-              {a()!.zeroPhaseFrequency !== undefined ? `; zero phase at ${fmtF(a()!.zeroPhaseFrequency!)}` : '; no zero-phase point near resonance'}
-              {'. Loaded peak: '}{fmtF(a()!.loadedResonantFrequency)}.
-            </p>
+            <p class="tw-formula-meta" id="out-f-detail">{resonanceDetail(a()!)}</p>
           </Show>
         </ResultRow>
         <ResultRow id="out-qu" label="Unloaded Q (coil and capacitor)" symbol="Qᵤ" value={a()?.unloadedQ} stale={stale()}>
           <Formula math={props.unloadedQ} source="Pozar, Microwave Engineering" validity="losses add; with Cₛ the capacitor's share is weighted by C/(C + Cₛ)" />
         </ResultRow>
         <ResultRow id="out-ql" label="Loaded Q (with source and load)" value={a()?.loadedQ} stale={stale()} primary>
-          <Formula math={shownMode() === 'parallel' ? props.loadedQParallel : props.loadedQSeries} source="Pozar, Microwave Engineering" validity={`external Q here ${a() && Number.isFinite(a()!.externalQ) ? a()!.externalQ.toPrecision(4) : '∞ (no source or load resistance)'}`} />
+          <Formula math={shownMode() === 'parallel' ? props.loadedQParallel : props.loadedQSeries} source="Pozar, Microwave Engineering" validity={`external Q here ${a() && Number.isFinite(a()!.externalQ) ? formatNumber(a()!.externalQ, 3) : '∞ (no source or load resistance)'}`} />
         </ResultRow>
         <ResultRow id="out-bw" label="Bandwidth (−3 dB, loaded)" symbol="B" value={a()?.bandwidth} unit="Hz" stale={stale()} primary>
           <Formula math={props.bandwidth} source="Terman 1943" validity="the value shown is the exact −3 dB width of the computed response; f/Q_L agrees to about 1/Q_L²" />
-          <Show when={r()?.edges.lower !== undefined && r()?.edges.upper !== undefined}>
-            <p class="tw-formula-meta" id="out-bw-edges">−3 dB points: {fmtF(r()!.edges.lower!)} and {fmtF(r()!.edges.upper!)}. Unloaded bandwidth {formatQuantity(a()!.unloadedBandwidth, 'Hz', 4)}.</p>
+          <Show when={a()}>
+            <p class="tw-formula-meta" id="out-bw-edges">−3 dB points: {fmtF(a()!.lowerFrequency)} and {fmtF(a()!.upperFrequency)}. Unloaded bandwidth {fmtF(a()!.unloadedBandwidth)}.</p>
           </Show>
         </ResultRow>
         <ResultRow id="out-rd" label={shownMode() === 'parallel' ? 'Dynamic resistance (tank alone, at its peak)' : 'Resistance at resonance (tank alone)'} value={a()?.dynamicResistance} unit="Ω" stale={stale()}>
           <Formula math={shownMode() === 'parallel' ? props.dynamicParallel : props.dynamicSeries} source="Terman 1943" validity={`shown: |Z| computed at the ${shownMode() === 'parallel' ? 'peak' : 'dip'}; the rule agrees for Q above about 10`} />
           <Show when={a()}>
-            <p class="tw-formula-meta">With source and load: |Z| = {formatQuantity(a()!.loadedImpedance, 'Ω', 4)} at the loaded peak.</p>
+            <p class="tw-formula-meta">With source and load: |Z| = {formatQuantity(a()!.loadedImpedance, 'Ω', 4)} at the loaded {shownMode() === 'parallel' ? 'peak' : 'dip'}.</p>
           </Show>
         </ResultRow>
+
+        <Show
+          when={a()?.transducerLoss !== undefined}
+          fallback={<p class="tw-table-note" id="out-loss-none">Give both the source and the load resistance to see the loss from source to load.</p>}
+        >
+          <div class="tank-pair" id="losses">
+            <ResultRow id="out-tl" label="Transducer loss, source to load, dB" value={a()?.transducerLoss} significant={3} stale={stale()} primary>
+              <Formula math={props.transducerLoss} source="Pozar, Microwave Engineering (transducer power gain)" validity="from the circuit at the loaded resonance, for any source and load" />
+              <p class="tw-formula-meta" id="out-tl-parts">
+                Mismatch at the source {fmtDb(a()!.mismatchLoss!)} + lost in the coil and capacitor {fmtDb(a()!.dissipativeLoss!)}.
+              </p>
+            </ResultRow>
+            <ResultRow id="out-il" label="Insertion-loss rule, dB" value={a()?.insertionLoss} significant={3} stale={stale()}>
+              <Formula math={props.insertionLoss} source="common practice; derived on the method page" validity="equal source and load resistances only" />
+              <p class="tw-formula-meta" id="out-il-note">
+                {unequal()
+                  ? 'Source and load differ here, so the rule does not apply: read the transducer loss.'
+                  : 'Equal terminations: the rule and the transducer loss agree.'}
+              </p>
+            </ResultRow>
+          </div>
+        </Show>
+
         <div class="tank-pair">
           <ResultRow id="out-qcoil" label="Coil Q at f₀" value={a()?.coilQ} stale={stale()}>
             <Formula math={props.coilQ} source="definition of Q" />
@@ -413,19 +348,13 @@ export default function TankBench(props: TankFormulas) {
             </Show>
           </ResultRow>
         </div>
-        <ResultRow id="out-il" label="Insertion loss as a single-resonator filter, dB" value={a()?.insertionLoss} significant={3} stale={stale()}>
-          <Formula math={props.insertionLoss} source="common practice; derived on the method page" validity="equal source and load resistances, near resonance" />
-          <Show when={a()} >
-            <p class="tw-formula-meta">
-              {a()!.insertionLoss === undefined
-                ? 'Give both the source and the load resistance to see the insertion loss.'
-                : `Transducer loss at the loaded peak (includes any mismatch): ${a()!.transducerLoss!.toFixed(2)} dB.`}
-            </p>
-          </Show>
-        </ResultRow>
 
-        <h2 class="tank-heading">Voltages and currents at resonance</h2>
-        <Show when={!driveBlank()} fallback={<p class="tw-table-note">Give the drive (voltage or power) to see the capacitor voltage and the circulating current.</p>}>
+        <Show when={driveGiven()} fallback={
+          <Show when={ratingsGiven()}>
+            <p class="tw-table-note" id="out-stress-none">Give the drive (voltage or power) to check the capacitor and wire against their ratings.</p>
+          </Show>
+        }>
+          <h2 class="tank-heading" id="stress-title">Voltages and currents at resonance</h2>
           <div class="tank-stack">
             <ResultRow id="out-vc" label="Capacitor voltage, RMS" value={s()?.capacitorVoltage} unit="V" stale={stressStale()}>
               <Formula math={shownMode() === 'parallel' ? props.capVoltageParallel : props.capVoltageSeries} source="circuit algebra at resonance" />
@@ -433,13 +362,13 @@ export default function TankBench(props: TankFormulas) {
             <ResultRow id="out-vcpk" label="Capacitor voltage, peak" value={s()?.capacitorVoltagePeak} unit="V" stale={stressStale()}>
               <p class="tw-formula-meta">√2 × RMS for a sine; compare with the capacitor's rating.</p>
             </ResultRow>
+            <ResultRow id="out-icirc" label="Circulating current (in the coil), RMS" value={s()?.circulatingCurrent} unit="A" stale={stressStale()}>
+              <Formula math={shownMode() === 'parallel' ? props.circulatingParallel : props.circulatingSeries} source="circuit algebra at resonance" />
+              <Show when={s()}>
+                <p class="tw-formula-meta">Drive {formatQuantity(s()!.driveVoltage, 'V', 4)} RMS, {formatQuantity(s()!.power, 'W', 4)}, line current {formatQuantity(s()!.lineCurrent, 'A', 4)} at {fmtF(s()!.frequency)}.</p>
+              </Show>
+            </ResultRow>
           </div>
-          <ResultRow id="out-icirc" label="Circulating current (in the coil), RMS" value={s()?.circulatingCurrent} unit="A" stale={stressStale()}>
-            <Formula math={shownMode() === 'parallel' ? props.circulatingParallel : props.circulatingSeries} source="circuit algebra at resonance" />
-            <Show when={s()}>
-              <p class="tw-formula-meta">Drive {formatQuantity(s()!.driveVoltage, 'V', 4)} RMS, {formatQuantity(s()!.power, 'W', 4)}, line current {formatQuantity(s()!.lineCurrent, 'A', 4)} at {fmtF(s()!.frequency)}.</p>
-            </Show>
-          </ResultRow>
         </Show>
         <NoteList notes={notes()} />
       </div>
@@ -455,12 +384,13 @@ export default function TankBench(props: TankFormulas) {
             formatX={tick('Hz', 4)}
             series={[
               { label: '|Z|', values: r()!.sweep.magnitude, unit: 'Ω' },
-              { label: 'Phase', values: r()!.sweep.phase, unit: '°', axis: 'right', dash: true },
+              { label: 'Phase', values: r()!.sweep.phase, unit: '°', axis: 'right', dash: true, format: fmtDeg },
             ]}
             yLabel="|Z| (Ω)"
             yLog
             formatY={tick('Ω', 3)}
             y2Label="Phase (°)"
+            keyPoints={a() ? [{ x: a()!.resonantFrequency, label: shownMode() === 'parallel' ? '|Z| peak' : '|Z| dip' }] : []}
             stale={stale()}
           />
           <Plot
@@ -470,9 +400,9 @@ export default function TankBench(props: TankFormulas) {
             xLabel="Frequency"
             xLog={wide()}
             formatX={tick('Hz', 4)}
-            series={[{ label: 'Response', values: r()!.sweep.response, unit: 'dB' }]}
+            series={[{ label: 'Response', values: r()!.sweep.response, unit: 'dB', format: fmtResponse }]}
             yLabel="Response (dB)"
-            markers={markers()}
+            markers={edges()}
             stale={stale()}
           />
           <div class="tank-downloads">

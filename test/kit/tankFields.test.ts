@@ -197,7 +197,7 @@ describe('What the core is given', () => {
   });
 
   it('the plotted sweep, centred on the resonance, has its middle point on the |Z| peak', async () => {
-    for (const texts of [{}, { Rs: '50', Rload: '' }, { coilQ: '5', Rs: '', Rload: '' }]) {
+    for (const texts of [{}, { Rs: '50', Rload: '' }, { coilQ: '5', Rs: '', Rload: '' }] as Record<string, string>[]) {
       const tank = tankOf(await specOf({}, texts));
       const a = analyzeTank(tank);
       const sw = sweepTank(tank, { ...sweepSpan(a.resonantFrequency, a.bandwidth), points: SWEEP_POINTS, spacing: 'log' });
