@@ -69,6 +69,7 @@ describe.runIf(browserAvailable())('axe-core on every page', () => {
       await page.waitForTimeout(30);
     }
     for (const plot of await page.locator('.tw-plot').all()) {
+      await plot.scrollIntoViewIfNeeded();
       await expect.poll(() => plot.locator('canvas').count(), { timeout: 10_000 }).toBeGreaterThan(0);
     }
     await page.evaluate(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done))));

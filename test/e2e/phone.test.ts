@@ -21,12 +21,16 @@ function routes(dir = DIST, out: string[] = []): string[] {
   return out.sort();
 }
 
-/** Scrolls to the end in steps (so what builds on coming into view is built), then back to the top. */
+/** Scrolls to the end in steps (so what is drawn on coming into view is drawn), builds every plot, then back to the top. */
 async function scrollThrough(page: Page): Promise<void> {
   const height = await page.evaluate(() => document.documentElement.scrollHeight);
   for (let y = 0; y < height; y += PHONE.height / 2) {
     await page.evaluate((top) => window.scrollTo(0, top), y);
     await page.waitForTimeout(30);
+  }
+  for (const plot of await page.locator('.tw-plot').all()) {
+    await plot.scrollIntoViewIfNeeded();
+    await expect.poll(() => plot.locator('canvas').count(), { timeout: 10_000 }).toBeGreaterThan(0);
   }
   await page.evaluate(() => window.scrollTo(0, 0));
 }
@@ -50,6 +54,14 @@ describe.runIf(browserAvailable())('pages on a 390 px phone', () => {
       .filter((el) => el.getBoundingClientRect().right > limit + 1 && !el.closest('.tw-formula-math, .katex, .tw-math-block, .tw-plot-keys-wrap'))
       .slice(0, 5).map((el) => `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} → ${Math.round(el.getBoundingClientRect().right)} px`), PHONE.width);
     expect(width, `wider than the screen: ${wide.join('; ')}`).toBeLessThanOrEqual(PHONE.width);
+    // Nor does anything run past its own column to be cut off there (off-screen parts are clipped
+    // to their box until drawn, so an overflow would not show in the page's width): only boxes
+    // made to scroll may hold more than they show.
+    const cut = await page.evaluate(() => [...document.querySelectorAll('main *')]
+      .filter((el) => el.scrollWidth > el.clientWidth + 1 && el.clientWidth > 0 && !/auto|scroll/.test(getComputedStyle(el).overflowX))
+      .filter((el) => ![...el.querySelectorAll('*')].some((inner) => /auto|scroll/.test(getComputedStyle(inner).overflowX) && inner.scrollWidth >= el.scrollWidth - 1))
+      .slice(0, 5).map((el) => `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} ${el.clientWidth}/${el.scrollWidth} px`));
+    expect(cut, 'content wider than its column').toEqual([]);
     await context.close();
   });
 

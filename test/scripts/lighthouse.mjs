@@ -9,10 +9,14 @@
  *   --runs N   runs each page N times and reports the run with the median performance score
  *   --json     prints the rows as JSON
  * CHROME_PATH overrides /usr/bin/chromium.
+ *
+ * Lighthouse simulates the slow phone from the tasks it observes here, so a
+ * busy machine inflates total blocking time: the load average is printed
+ * before and after (compare figures taken at similar load, or use --runs).
  */
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createRequire } from 'node:module';
 import lighthouse from 'lighthouse';
@@ -27,6 +31,8 @@ const asJson = flag('--json');
 const runs = Math.max(1, Number(option('--runs', '1')) || 1);
 
 requireBuild();
+const load = () => loadavg().map((x) => x.toFixed(1)).join(' ');
+const loadBefore = load();
 const routes = args.length ? args : builtRoutes();
 const site = await serve();
 const origin = site.origin;
@@ -108,4 +114,5 @@ function printRow(r, header) {
   ].join(' '));
 }
 
-if (asJson) console.log(JSON.stringify({ dist, runs, pages: rows }, null, 2));
+if (asJson) console.log(JSON.stringify({ dist, runs, loadBefore, loadAfter: load(), cpus: cpus().length, pages: rows }, null, 2));
+else console.log(`load average ${loadBefore} before, ${load()} after, on ${cpus().length} CPUs`);
