@@ -12,7 +12,7 @@
  * fields in use and where a core error is shown all come from it. The one
  * addition to the link is `coil`: the Coil bench's own link query, carried by
  * a coil handed over, read with the Coil bench's table and offered back as
- * "Back to the coil".
+ * "Back to the coil". That table loads only when a link carries a coil.
  */
 import { createMemo, createSignal, Show, type JSX } from 'solid-js';
 // Core modules imported one by one, not through the index: the page then ships only these.
@@ -33,7 +33,6 @@ import { NoteList } from '../kit/Note';
 import { Plot } from '../kit/Plot';
 import { ResultRow } from '../kit/ResultRow';
 import { Summary, type SummaryItem } from '../kit/Summary';
-import { COIL_FIELDS } from './coilFields';
 import {
   collapseNoteOf, DRIVE_KEYS, handOffGreeting, readCoilLink, splitCoilLink, stressOf, sweepSpan, SWEEP_POINTS, TANK_FIELDS,
   tankOf, withCoilLink, type TankSpec,
@@ -111,24 +110,34 @@ export default function TankBench(props: TankFormulas) {
   const bench = createBenchState<TankSpec>(TANK_FIELDS);
   /** A coil handed over: its link query (written again by its table) and the greeting. */
   const [coil, setCoil] = createSignal<{ query: string; greeting: string } | null>(null);
+  const [coilNotice, setCoilNotice] = createSignal<string | null>(null);
   const [driveOpen, setDriveOpen] = createSignal(false);
 
-  const notices = createUrlState({
+  const linkNotices = createUrlState({
     readLink(search) {
       const { rest, coil: coilText } = splitCoilLink(search);
       const d = bench.readLink(rest);
-      const out = [...d.notices];
       if (coilText !== undefined) {
-        const r = readCoilLink(COIL_FIELDS, coilText);
-        if ('notice' in r) out.push(r.notice);
-        else setCoil({ query: r.query, greeting: handOffGreeting(d.texts) });
+        // The Coil bench's table, only for a link that carries a coil.
+        import('./coilFields').then(
+          ({ COIL_FIELDS }) => {
+            const r = readCoilLink(COIL_FIELDS, coilText);
+            if ('notice' in r) setCoilNotice(r.notice);
+            else setCoil({ query: r.query, greeting: handOffGreeting(d.texts) });
+          },
+          () => setCoilNotice('The way back to the Coil bench could not be loaded; the values the link gave are shown.'),
+        );
       }
       // A link that carries a drive or a rating opens the section that holds them.
       if (DRIVE_KEYS.some((k) => (d.texts[k] ?? '') !== '')) setDriveOpen(true);
-      return { notices: out };
+      return { notices: d.notices };
     },
     linkQuery: () => withCoilLink(bench.linkQuery(), coil()?.query),
   });
+  const notices = () => {
+    const extra = coilNotice();
+    return extra ? [...linkNotices(), extra] : linkNotices();
+  };
 
   const calc = bench.compute((spec) => {
     const tank = tankOf(spec);
