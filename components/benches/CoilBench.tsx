@@ -22,7 +22,8 @@ import { NoteList } from '../kit/Note';
 import { Plot } from '../kit/Plot';
 import { ResultRow } from '../kit/ResultRow';
 import { Summary, type SummaryItem } from '../kit/Summary';
-import { buildCoilSpec, COIL_FIELDS, designCoilFromFields, tankHandOff } from './coilFields';
+import { designCoilFromFields, tankHandOff } from './coilDesign';
+import { buildCoilSpec, COIL_FIELDS } from './coilFields';
 
 export type CoilFormulaKey =
   | 'solenoidL' | 'wheeler' | 'meanDiameter' | 'overall' | 'windingLength' | 'wireSolenoid' | 'rdc' | 'racSolenoid'
@@ -85,7 +86,7 @@ function qWords(d: DesignCoilResult): { text: string; detail: string } | undefin
   const leansUp = d.qUncertainty.above > 1.5 * d.qUncertainty.below;
   return {
     text: `${sayQ(d.q)} (${sayQ(d.qLow)}–${sayQ(d.qHigh)})`,
-    detail: leansUp ? `${at}; more likely above ${sayQ(d.q)} than below: the loss method overstates close turns` : `${at}; the band is our estimate of the model’s error`,
+    detail: leansUp ? `${at}; likelier above ${sayQ(d.q)} than below: the method overstates close-turn loss` : `${at}; the band is our estimate of the model’s error`,
   };
 }
 
@@ -199,7 +200,7 @@ export default function CoilBench(props: CoilFormulas) {
           </Show>
           <Show when={form() === 'multilayer'}>
             <p class="tw-coil-detail" id="out-fit">
-              {d()!.fits ? 'Fits' : 'Does not fit'} the winding section: about {formatNumber(d()!.capacity ?? Number.NaN, 4)} turns of this wire do, laid layer on layer.
+              {d()!.fits ? 'Fits' : 'Does not fit'} the winding section: about {Math.round(d()!.capacity ?? Number.NaN)} turns of this wire do, laid layer on layer.
             </p>
             <Formula math={props.multilayerL} source="Wheeler, Proc. IRE 16, 1928 (a, b, c in inches)" validity="about 1–2 % while 6a, 9b and 10c are within a factor of two of each other" />
           </Show>

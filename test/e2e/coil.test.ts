@@ -15,7 +15,8 @@ import { isDesignError } from '../../src/core/errors';
 import { formatQuantity } from '../../src/quantity';
 import { snapshotToSpec } from '../../components/kit/documents';
 import { decodeLink, defaultChoices, defaultSnapshot, type BenchSnapshot, type FieldTable } from '../../components/kit/fields';
-import { buildCoilSpec, COIL_FIELDS, designCoilFromFields } from '../../components/benches/coilFields';
+import { buildCoilSpec, COIL_FIELDS } from '../../components/benches/coilFields';
+import { designCoilFromFields } from '../../components/benches/coilDesign';
 import { browserAvailable, hydrated, openPage, retype, expectHostileLinkIgnored, useSiteAndBrowser, valueOf } from './harness';
 import { rel } from '../helpers/asserts';
 

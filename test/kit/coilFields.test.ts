@@ -1,5 +1,5 @@
 /**
- * The Coil bench's field table and spec builder (components/benches/coilFields.ts),
+ * The Coil bench's field table and spec builder (components/benches/coilFields.ts, coilDesign.ts),
  * in Node: the link round trip of every combination of choices (negative
  * temperatures, calculations), the conversions of the spec builder (gauges,
  * enamel, former → mean diameter) against the published definitions, a
@@ -7,6 +7,7 @@
  * field, the way back from a DesignCoilSpec, and the hand-off to the Tank
  * bench. Routing and round trips are behaviour of our own design, checked by hand.
  */
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { designCoil, type DesignCoilResult, type DesignCoilSpec } from '../../src/core/coil';
 import { isDesignError } from '../../src/core/errors';
@@ -16,9 +17,8 @@ import {
   decodeLink, defaultChoices, defaultSnapshot, encodeLink, fieldsInUse, pathsOf, routeDesignError,
   type BenchSnapshot, type Choices, type FieldTable,
 } from '../../components/kit/fields';
-import {
-  AWG_RANGE, COIL_FIELDS, SWG_RANGE, buildCoilSpec, coilSnapshotFromSpec, designCoilFromFields, tankHandOff,
-} from '../../components/benches/coilFields';
+import { AWG_RANGE, COIL_FIELDS, SWG_RANGE, buildCoilSpec } from '../../components/benches/coilFields';
+import { coilSnapshotFromSpec, designCoilFromFields, tankHandOff } from '../../components/benches/coilDesign';
 import { rel, thomson } from '../helpers/asserts';
 
 const TABLE = COIL_FIELDS as FieldTable;
@@ -67,6 +67,13 @@ async function run(s: BenchSnapshot): Promise<{ spec: DesignCoilSpec; result?: D
 }
 
 describe('Coil field table', () => {
+  it('brings none of the coil’s physics with it (the Tank bench imports it to read a coil’s link)', () => {
+    const source = readFileSync(new URL('../../components/benches/coilFields.ts', import.meta.url), 'utf8');
+    const imports = [...source.matchAll(/^import (type )?.*from '([^']+)';$/gm)].filter((m) => !m[1]).map((m) => m[2]);
+    expect(imports).not.toContain('../../src/core/coil');
+    expect(imports.filter((i) => i.startsWith('../../src/core/'))).toEqual(['../../src/core/errors', '../../src/core/wire']);
+  });
+
   it('offers AWG 8–40 and SWG 10–48 as selects', () => {
     const opts = (key: string) => {
       const f = TABLE.find((x) => x.key === key);
