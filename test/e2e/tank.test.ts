@@ -39,6 +39,11 @@ async function summaryValue(page: Page, id: string): Promise<number> {
   return raw === null || raw === '' ? Number.NaN : Number(raw);
 }
 
+/** Types into several fields in turn, as a person would (field id → text). */
+async function typeAll(page: Page, texts: Record<string, string>): Promise<void> {
+  for (const [id, text] of Object.entries(texts)) await retype(page, id, text);
+}
+
 /** What analyzeTank gives, in Node, for the tank a Tank link describes (read with the bench's own table). */
 async function analysisOf(query: string) {
   const d = decodeLink(TANK_FIELDS, query);
@@ -90,12 +95,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     const { page, errors } = await openPage(env.browser, `${env.site.origin}/tank/`);
     await hydrated(page);
     await page.locator('input[name=mode][value=parallel]').check();
-    await retype(page, 'L', '10u');
-    await retype(page, 'coilQ', '120');
-    await retype(page, 'C', '220p');
-    await retype(page, 'capQ', '2000');
-    await retype(page, 'Rs', '22k');
-    await retype(page, 'Rload', '22k');
+    await typeAll(page, { L: '10u', coilQ: '120', C: '220p', capQ: '2000', Rs: '22k', Rload: '22k' });
     // Independent numbers: a 10 µH, 220 pF tank between two 22 kΩ terminations.
     const L = 10e-6, C = 220e-12, Rs = 22e3, Rl = 22e3;
     const f0 = thomson(L, C); // Terman 1943
@@ -220,12 +220,7 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     // the demo terminations follow the tank: high across a parallel tank, low in a series loop
     expect(await page.locator('#Rs').inputValue()).toBe('5 Ω');
     expect(await page.locator('#Rload').inputValue()).toBe('5 Ω');
-    await retype(page, 'L', '2.2u');
-    await retype(page, 'coilQ', '200');
-    await retype(page, 'C', '470p');
-    await retype(page, 'capQ', '1500');
-    await retype(page, 'Rs', '2');
-    await retype(page, 'Rload', '3');
+    await typeAll(page, { L: '2.2u', coilQ: '200', C: '470p', capQ: '1500', Rs: '2', Rload: '3' });
     const L = 2.2e-6, C = 470e-12;
     const f0 = thomson(L, C); // Terman 1943
     const X = TWO_PI * f0 * L;
@@ -259,15 +254,11 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     await retype(page, 'coilQ', '-5');
     await expect.poll(() => page.locator('#coilQ-msg').textContent()).toMatch(/greater than zero/i);
     // an objection from the core, shown at the field it names: a coil this lossy leaves no resonance
-    await retype(page, 'Rs', '');
-    await retype(page, 'Rload', '');
-    await retype(page, 'coilQ', '0.3');
+    await typeAll(page, { Rs: '', Rload: '', coilQ: '0.3' });
     await expect.poll(() => page.locator('#coilQ-msg').textContent()).toMatch(/hardly resonates/i);
     expect(await page.locator('.tw-field-msg').count()).toBe(1);
     expect(await page.locator('#out-ql').getAttribute('class')).toContain('stale');
-    await retype(page, 'coilQ', '150');
-    await retype(page, 'Rs', '10k');
-    await retype(page, 'Rload', '10k');
+    await typeAll(page, { coilQ: '150', Rs: '10k', Rload: '10k' });
     await expect.poll(() => page.locator('#coilQ-msg').count()).toBe(0);
     expect(await page.locator('#out-ql').getAttribute('class')).not.toContain('stale');
     expect(await valueOf(page, 'out-ql')).toBeCloseTo(before, 10);
