@@ -2,11 +2,19 @@
  * A labelled input for one quantity. Parses as the person types, ties its
  * message to the input (aria-describedby) and never throws away what was typed.
  */
-import { Show, type JSX } from 'solid-js';
-import type { QuantityState } from './quantityState';
+import { Show, type Accessor, type JSX } from 'solid-js';
 
-/** What a field needs from its state: a QuantityState, or a plain-number state (numberState.ts). */
-export type FieldState = Pick<QuantityState, 'text' | 'error' | 'pending' | 'setText'> & { readonly unit?: string };
+/** What a field needs from its state (a field of a bench's table, see bench.ts). */
+export interface FieldState {
+  /** What is in the field, exactly as typed. */
+  text: Accessor<string>;
+  /** Why the current text is not a value; null when it is. */
+  error: Accessor<string | null>;
+  /** True while a calculation is being evaluated. */
+  pending: Accessor<boolean>;
+  setText(text: string): void;
+  readonly unit?: string;
+}
 
 export interface QuantityFieldProps {
   /** Stable id, unique on the page (also the URL key of the field). */
