@@ -23,17 +23,13 @@ export interface FormulaProps {
 }
 
 export function Formula(props: FormulaProps) {
+  // Few reactive parts: a bench hydrates a dozen of these at once.
+  const meta = () => [props.source, props.validity].filter(Boolean).join(' · ');
   return (
     <div class="tw-formula">
-      <Show when={props.math} fallback={<div class="tw-formula-math" innerHTML={props.html ?? ''} />}>
-        <div class="tw-formula-math">{props.math}</div>
-      </Show>
-      <Show when={props.source || props.validity}>
-        <p class="tw-formula-meta">
-          <Show when={props.source}><span class="tw-source">{props.source}</span></Show>
-          <Show when={props.source && props.validity}>{' · '}</Show>
-          <Show when={props.validity}><span class="tw-validity">{props.validity}</span></Show>
-        </p>
+      {props.math !== undefined ? <div class="tw-formula-math">{props.math}</div> : <div class="tw-formula-math" innerHTML={props.html ?? ''} />}
+      <Show when={meta()}>
+        <p class="tw-formula-meta">{meta()}</p>
       </Show>
     </div>
   );
