@@ -1,8 +1,10 @@
 /**
  * Phone: every built page at 390 × 844 (a common phone's CSS viewport) is no
  * wider than the screen, also after scrolling to the end (plots build when
- * they come into view). A formula wider than the screen scrolls inside its
- * own box instead. The 390 px width: common practice, no published source.
+ * they come into view), and nothing on it moves while it loads (here and at
+ * 1280 px: parts below the first screen are drawn late, and must not push
+ * what is on it). A formula wider than the screen scrolls inside its own box
+ * instead. The 390 px width: common practice, no published source.
  */
 import { readdirSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
@@ -35,6 +37,25 @@ async function scrollThrough(page: Page): Promise<void> {
   await page.evaluate(() => window.scrollTo(0, 0));
 }
 
+/**
+ * Opens the page and returns its layout shift while loading, as browsers score it (cumulative
+ * layout shift; 0.1 is the usual "good" limit, and a page that paints its text and then its
+ * islands in place shifts not at all). Every shift counts: nobody touches the page while it
+ * loads (Playwright's mobile emulation marks early shifts as following input, which would hide them).
+ */
+async function shiftWhileLoading(page: Page, url: string): Promise<number> {
+  await page.addInitScript(() => {
+    const w = window as unknown as { __shift: number };
+    w.__shift = 0;
+    new PerformanceObserver((list) => {
+      for (const e of list.getEntries() as (PerformanceEntry & { value: number })[]) w.__shift += e.value;
+    }).observe({ type: 'layout-shift', buffered: true });
+  });
+  await page.goto(url, { waitUntil: 'networkidle' });
+  await hydrated(page);
+  return page.evaluate(() => (window as unknown as { __shift: number }).__shift);
+}
+
 describe.runIf(browserAvailable())('pages on a 390 px phone', () => {
   const env = useSiteAndBrowser();
   const pages = browserAvailable() ? routes() : [];
@@ -43,11 +64,10 @@ describe.runIf(browserAvailable())('pages on a 390 px phone', () => {
     expect(pages).toEqual(expect.arrayContaining(['/', '/resonance/', '/coil/', '/tank/']));
   });
 
-  it.each(pages)('%s is no wider than the screen', async (route) => {
+  it.each(pages)('%s is no wider than the screen, and nothing moves while it loads', async (route) => {
     const context = await env.browser.newContext({ viewport: PHONE, isMobile: true, hasTouch: true });
     const page = await context.newPage();
-    await page.goto(env.site.origin + route, { waitUntil: 'networkidle' });
-    await hydrated(page);
+    expect(await shiftWhileLoading(page, env.site.origin + route)).toBeLessThan(0.01);
     await scrollThrough(page);
     const width = await page.evaluate(() => document.scrollingElement!.scrollWidth);
     const wide = await page.evaluate((limit) => [...document.querySelectorAll('body *')]
@@ -62,6 +82,12 @@ describe.runIf(browserAvailable())('pages on a 390 px phone', () => {
       .filter((el) => ![...el.querySelectorAll('*')].some((inner) => /auto|scroll/.test(getComputedStyle(inner).overflowX) && inner.scrollWidth >= el.scrollWidth - 1))
       .slice(0, 5).map((el) => `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} ${el.clientWidth}/${el.scrollWidth} px`));
     expect(cut, 'content wider than its column').toEqual([]);
+    await context.close();
+  });
+
+  it.each(pages)('%s does not move while it loads on a 1280 px screen either', async (route) => {
+    const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
+    expect(await shiftWhileLoading(await context.newPage(), env.site.origin + route)).toBeLessThan(0.01);
     await context.close();
   });
 
