@@ -23,27 +23,11 @@ import { tankStress } from '../../src/core/tankStress';
 import { sweepTank } from '../../src/core/tankSweep';
 import { COIL_LIKE } from './sampleTables';
 import { fieldOf, rel, thomson } from '../helpers/asserts';
+import { inUse as inUseOf, radioCombinations } from '../helpers/fields';
 
-/** Every combination of the table's radio choices. */
-function radioCombinations(table: FieldTable): Record<string, string>[] {
-  let combos: Record<string, string>[] = [defaultChoices(table)];
-  for (const f of table) {
-    if (f.kind !== 'choice' || f.display === 'select') continue;
-    combos = combos.flatMap((c) => f.options.map(([v]) => ({ ...c, [f.key]: v })));
-  }
-  return combos;
-}
+const inUse = (s: BenchSnapshot) => inUseOf(TANK_FIELDS, s);
 
-/** The part of a state the link carries: choices and texts of the fields in use. */
-function inUse(s: BenchSnapshot) {
-  const choices = { ...defaultChoices(TANK_FIELDS), ...s.choices };
-  const out = { choices: {} as Record<string, string>, texts: {} as Record<string, string> };
-  for (const f of fieldsInUse(TANK_FIELDS, choices)) {
-    if (f.kind === 'choice') out.choices[f.key] = choices[f.key];
-    else out.texts[f.key] = (s.texts[f.key] ?? '').trim();
-  }
-  return out;
-}
+
 
 /** The spec of a state, as the bench builds it. */
 async function specOf(choices: Record<string, string>, texts: Record<string, string> = {}): Promise<TankSpec> {
