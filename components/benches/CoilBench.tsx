@@ -11,7 +11,8 @@
 import { createMemo, Show, untrack, type JSX } from 'solid-js';
 import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
 import { formatNumber, formatQuantity, formatQuantityCompact } from '../../src/quantity';
-import { createBenchState } from '../kit/bench';
+import { createBenchState, type BenchState } from '../kit/bench';
+import { createAwake, inParts, Later, type BenchParts } from '../kit/Later';
 import { createUrlState } from '../kit/createUrlState';
 import { Field } from '../kit/Field';
 import type { Choices, SpecObject } from '../kit/fields';
@@ -119,9 +120,67 @@ function summaryItems(run: CoilRun): SummaryItem[] {
   return items;
 }
 
-export default function CoilBench(props: CoilFormulas) {
+/** The island, hydrated in parts (kit/Later): no single task blocks a phone for long. */
+export default inParts('coil', CoilBenchParts);
+
+function CoilBenchParts(outer: BenchParts<CoilFormulas>) {
+  const props = outer.formulas;
   const bench = createBenchState(COIL_FIELDS);
   const notices = createUrlState(bench);
+  const awake = createAwake(() => bench.load(outer.early));
+
+  return (
+    <div class="tw-bench tw-coil" data-bench="coil" data-awake={awake() ? '' : undefined}>
+      <LinkNotices notices={notices()} />
+      <div class="tw-bench-inputs">
+        <Later>
+          <Field bench={bench} name="form" />
+          <Field bench={bench} name="give" />
+          <Field bench={bench} name="L" />
+          <Field bench={bench} name="N" />
+          <Field bench={bench} name="dia" />
+          <Field bench={bench} name="D" />
+          <Field bench={bench} name="wind" />
+          <Field bench={bench} name="p" />
+          <Field bench={bench} name="OD" />
+          <Field bench={bench} name="ID" />
+          <Field bench={bench} name="h" />
+          <Field bench={bench} name="core" />
+          <Field bench={bench} name="AL" />
+        </Later>
+        <Later>
+          <Field bench={bench} name="mu" />
+          <Field bench={bench} name="mu2" />
+          <Field bench={bench} name="mD" />
+          <Field bench={bench} name="mlen" />
+          <Field bench={bench} name="depth" />
+          <Field bench={bench} name="wire" />
+          <Field bench={bench} name="awg" />
+          <Field bench={bench} name="swg" />
+          <Field bench={bench} name="wd" />
+          <Field bench={bench} name="enamel" />
+          <Field bench={bench} name="wod" />
+          <Field bench={bench} name="f" />
+          <Field bench={bench} name="lead" />
+          <Field bench={bench} name="T" />
+        </Later>
+        <Show when={bench.generalError()}>
+          <p class="tw-bench-error" role="alert">{bench.generalError()}</p>
+        </Show>
+      </div>
+
+      <div class="tw-bench-results" aria-live="polite">
+        <Later>
+          <CoilResults bench={bench} formulas={props} />
+        </Later>
+      </div>
+    </div>
+  );
+}
+
+/** The results: the computation (designCoil through the field table) and its layout, answer first. */
+function CoilResults(props: { bench: BenchState; formulas: CoilFormulas }) {
+  const bench = props.bench;
   const calc = bench.compute((raw, choices) => runCoil(raw, choices, untrack(() => bench.linkQuery())));
   const r = calc.result;
   const d = () => r()?.design;
@@ -140,47 +199,15 @@ export default function CoilBench(props: CoilFormulas) {
   const frequencyTick = (x: number) => (typeof x === 'number' && Number.isFinite(x) ? formatQuantityCompact(x, 'Hz', 3) : '');
 
   return (
-    <div class="tw-bench tw-coil" data-bench="coil">
-      <LinkNotices notices={notices()} />
-      <div class="tw-bench-inputs">
-        <Field bench={bench} name="form" />
-        <Field bench={bench} name="give" />
-        <Field bench={bench} name="L" />
-        <Field bench={bench} name="N" />
-        <Field bench={bench} name="dia" />
-        <Field bench={bench} name="D" />
-        <Field bench={bench} name="wind" />
-        <Field bench={bench} name="p" />
-        <Field bench={bench} name="OD" />
-        <Field bench={bench} name="ID" />
-        <Field bench={bench} name="h" />
-        <Field bench={bench} name="core" />
-        <Field bench={bench} name="AL" />
-        <Field bench={bench} name="mu" />
-        <Field bench={bench} name="mu2" />
-        <Field bench={bench} name="mD" />
-        <Field bench={bench} name="mlen" />
-        <Field bench={bench} name="depth" />
-        <Field bench={bench} name="wire" />
-        <Field bench={bench} name="awg" />
-        <Field bench={bench} name="swg" />
-        <Field bench={bench} name="wd" />
-        <Field bench={bench} name="enamel" />
-        <Field bench={bench} name="wod" />
-        <Field bench={bench} name="f" />
-        <Field bench={bench} name="lead" />
-        <Field bench={bench} name="T" />
-        <Show when={bench.generalError()}>
-          <p class="tw-bench-error" role="alert">{bench.generalError()}</p>
-        </Show>
-      </div>
-
-      <div class="tw-bench-results" aria-live="polite">
+    <>
+        <Later>
         <Show when={r()}>
           <Summary items={summaryItems(r()!)} stale={stale()} />
         </Show>
         <p class="tw-coil-wire-summary" id="out-wire-size">Wire: {r() ? wireWords(r()!) : ''}</p>
 
+        </Later>
+        <Later>
         <Show when={d()?.targetInductance !== undefined}>
           <ResultRow id="out-turns" label="Turns to wind" symbol="N" value={d()?.turns} stale={stale()} primary significant={sayTurns(d()?.turns ?? 1).replace('.', '').length}>
             <p class="tw-coil-detail" id="out-turns-detail">
@@ -188,36 +215,38 @@ export default function CoilBench(props: CoilFormulas) {
               {sayTurns(d()!.turns)} {form() === 'solenoid' ? '(nearest half turn)' : '(nearest whole turn)'} it is{' '}
               <strong>{formatQuantity(d()!.inductance, 'H', 4)}</strong>{formatShift(d()!.inductance / d()!.targetInductance! - 1) ? ` (${formatShift(d()!.inductance / d()!.targetInductance! - 1)})` : ''}.
             </p>
-            <Formula math={props.practical} source={form() === 'solenoid' ? 'half turns: leads leave on opposite sides' : 'whole turns: every pass through the hole is one turn'} />
+            <Formula math={props.formulas.practical} source={form() === 'solenoid' ? 'half turns: leads leave on opposite sides' : 'whole turns: every pass through the hole is one turn'} />
           </ResultRow>
         </Show>
         <ResultRow id="out-L" label={d()?.targetInductance !== undefined ? 'Inductance as wound' : 'Inductance'} symbol="L" value={d()?.inductance} unit="H" stale={stale()} primary={d()?.targetInductance === undefined} significant={5}>
           <Show when={form() === 'solenoid'}>
-            <Formula math={props.solenoidL} source="Nagaoka 1909; Rosa 1907; Grover 1946, ch. 16 and Table 7" validity="round wire, low frequency (includes the wire’s internal inductance), no metal or core nearby, pitch small beside the radius" />
+            <Formula math={props.formulas.solenoidL} source="Nagaoka 1909; Rosa 1907; Grover 1946, ch. 16 and Table 7" validity="round wire, low frequency (includes the wire’s internal inductance), no metal or core nearby, pitch small beside the radius" />
           </Show>
           <Show when={form() === 'toroid'}>
-            <Formula math={rc('core') === 'al' ? props.al : props.toroidL} source={rc('core') === 'al' ? 'definition of AL' : 'Ampère’s law; Grover 1946; Snelling 1988'} validity="evenly spread winding, all flux in the core; μ′ varies from core to core" />
+            <Formula math={rc('core') === 'al' ? props.formulas.al : props.formulas.toroidL} source={rc('core') === 'al' ? 'definition of AL' : 'Ampère’s law; Grover 1946; Snelling 1988'} validity="evenly spread winding, all flux in the core; μ′ varies from core to core" />
           </Show>
           <Show when={form() === 'multilayer'}>
             <p class="tw-coil-detail" id="out-fit">
               {d()!.fits ? 'Fits' : 'Does not fit'} the winding section: about {Math.round(d()!.capacity ?? Number.NaN)} turns of this wire do, laid layer on layer.
             </p>
-            <Formula math={props.multilayerL} source="Wheeler, Proc. IRE 16, 1928 (a, b, c in inches)" validity="about 1–2 % while 6a, 9b and 10c are within a factor of two of each other" />
+            <Formula math={props.formulas.multilayerL} source="Wheeler, Proc. IRE 16, 1928 (a, b, c in inches)" validity="about 1–2 % while 6a, 9b and 10c are within a factor of two of each other" />
           </Show>
         </ResultRow>
 
+        </Later>
+        <Later>
         <Show when={form() === 'solenoid'}>
           <ResultRow id="out-wheeler" label="Wheeler’s formula, for comparison" value={d()?.wheelerInductance} unit="H" stale={stale()}>
-            <Formula math={props.wheeler} source="Wheeler, Proc. IRE 16, 1928 (r, l in inches)" validity="current sheet, within about 1 % for l > 0.4 D; no round-wire correction" />
+            <Formula math={props.formulas.wheeler} source="Wheeler, Proc. IRE 16, 1928 (r, l in inches)" validity="current sheet, within about 1 % for l > 0.4 D; no round-wire correction" />
           </ResultRow>
           <ResultRow id="out-D" label="Mean winding diameter (wire centre to centre)" symbol="D" value={(r()?.spec as { diameter?: number } | undefined)?.diameter} unit="m" stale={stale()}>
-            <Formula math={props.meanDiameter} source="geometry" validity={rc('dia') === 'mean' ? 'as typed' : 'former diameter plus one overall wire diameter'} />
+            <Formula math={props.formulas.meanDiameter} source="geometry" validity={rc('dia') === 'mean' ? 'as typed' : 'former diameter plus one overall wire diameter'} />
             <Show when={rc('dia') !== 'mean' && (rc('enamel') === '1' || rc('enamel') === '2')}>
-              <Formula math={props.overall} source="approximate maximum overall diameter, fitted to IEC 60317-0-1 grades 1 and 2" validity="a few µm either way; measure the wire for a tight winding" />
+              <Formula math={props.formulas.overall} source="approximate maximum overall diameter, fitted to IEC 60317-0-1 grades 1 and 2" validity="a few µm either way; measure the wire for a tight winding" />
             </Show>
           </ResultRow>
           <ResultRow id="out-len" label="Winding length" symbol="l" value={d()?.windingLength} unit="m" stale={stale()}>
-            <Formula math={props.windingLength} source="geometry" validity={rc('wind') === 'pitch' ? 'spaced winding' : `close-wound: pitch = overall wire diameter, ${mm(d()?.pitch ?? 0)}`} />
+            <Formula math={props.formulas.windingLength} source="geometry" validity={rc('wind') === 'pitch' ? 'spaced winding' : `close-wound: pitch = overall wire diameter, ${mm(d()?.pitch ?? 0)}`} />
           </ResultRow>
         </Show>
         <Show when={form() === 'toroid'}>
@@ -227,26 +256,30 @@ export default function CoilBench(props: CoilFormulas) {
               area A<sub>e</sub> = {formatNumber((d()?.effectiveArea ?? Number.NaN) * 1e6, 4)} mm².
               About {d()?.turnsPerLayer} turns of this wire fit in one layer round the hole; {formatQuantity(d()?.lengthPerTurn ?? Number.NaN, 'm', 3)} of wire per turn.
             </p>
-            <Formula math={props.pathLength} source="IEC 60205 core factors" validity="rectangular section" />
+            <Formula math={props.formulas.pathLength} source="IEC 60205 core factors" validity="rectangular section" />
           </ResultRow>
         </Show>
 
+        </Later>
+        <Later>
         <ResultRow id="out-wire" label="Wire to cut" symbol="ℓ" value={d()?.wireLength} unit="m" stale={stale()}>
           <p class="tw-coil-detail">Includes both leads; add your own allowance for stripping and soldering.</p>
-          <Formula math={form() === 'toroid' ? props.wireToroid : form() === 'multilayer' ? props.wireMultilayer : props.wireSolenoid}
+          <Formula math={form() === 'toroid' ? props.formulas.wireToroid : form() === 'multilayer' ? props.formulas.wireMultilayer : props.formulas.wireSolenoid}
             source={form() === 'toroid' ? 'geometry (our estimate: wire centre line round the core’s section)' : form() === 'multilayer' ? 'mean turn length times turns' : 'geometry of the helix'} />
         </ResultRow>
         <ResultRow id="out-rdc" label="DC resistance" value={d()?.resistanceDc} unit="Ω" stale={stale()}>
-          <Formula math={props.rdc} source="IEC 60028 annealed copper, ρ₂₀ = 1/58 Ω·mm²/m, α = 0.00393 /K" />
+          <Formula math={props.formulas.rdc} source="IEC 60028 annealed copper, ρ₂₀ = 1/58 Ω·mm²/m, α = 0.00393 /K" />
         </ResultRow>
 
+        </Later>
+        <Later>
         <Show when={form() === 'solenoid' || form() === 'toroid'}>
           <ResultRow id="out-rac" label={`AC resistance at ${fText()}`} value={d()?.resistanceAc} unit="Ω" stale={stale()}>
             <Show when={form() === 'solenoid'}>
-              <Formula math={props.racSolenoid} source="Butterworth 1922 (exact skin effect; transverse-field loss in a long-coil field)" validity="best for l/D ≥ 1 and d/p ≤ 0.7; overstates the loss of close turns (see the notes); no proximity loss for a single turn" />
+              <Formula math={props.formulas.racSolenoid} source="Butterworth 1922 (exact skin effect; transverse-field loss in a long-coil field)" validity="best for l/D ≥ 1 and d/p ≤ 0.7; overstates the loss of close turns (see the notes); no proximity loss for a single turn" />
             </Show>
             <Show when={form() === 'toroid'}>
-              <Formula math={props.racSkin} source="exact skin effect of a round wire (Bessel functions)" validity="proximity of the other turns not included: a lower bound" />
+              <Formula math={props.formulas.racSkin} source="exact skin effect of a round wire (Bessel functions)" validity="proximity of the other turns not included: a lower bound" />
             </Show>
           </ResultRow>
           <ResultRow id="out-q" label={`Unloaded Q at ${fText()}`} symbol="Q" value={d()?.q} stale={stale()} significant={3}>
@@ -255,29 +288,33 @@ export default function CoilBench(props: CoilFormulas) {
                 Q between about {sayQ(d()!.qLow!)} and {sayQ(d()!.qHigh!)}: up to {Math.round(d()!.qUncertainty!.above * 100)} % above the figure and {Math.round(d()!.qUncertainty!.below * 100)} % below, by our estimate of the loss model’s error{d()!.qUncertainty!.above > 1.5 * d()!.qUncertainty!.below ? ' (one-sided: Butterworth’s method is known to overstate the loss of close turns)' : ''}.
                 Self-capacitance lowers the Q you measure across the coil to {sayQ(d()!.apparentQ ?? Number.NaN)}.
               </p>
-              <Formula math={props.q} source="definition of Q; L at f (skin effect removes part of the wire’s internal inductance)" validity="the band: Butterworth’s known overstatement for close turns, plus ±3 % and a share of the proximity loss (see the notes)" />
+              <Formula math={props.formulas.q} source="definition of Q; L at f (skin effect removes part of the wire’s internal inductance)" validity="the band: Butterworth’s known overstatement for close turns, plus ±3 % and a share of the proximity loss (see the notes)" />
             </Show>
             <Show when={form() === 'toroid'}>
               <p class="tw-coil-detail" id="out-q-range">
                 An upper bound. Core alone {d()?.coreQ === undefined ? 'not counted (μ″ blank or 0)' : sayQ(d()!.coreQ!)}, winding alone (skin effect only) {sayQ(d()?.windingQ ?? Number.NaN)}.
               </p>
-              <Formula math={props.toroidQ} source="Snelling 1988 (series complex permeability)" validity="μ′ and μ″ at the working frequency; the combination is an upper bound since proximity loss is left out" />
+              <Formula math={props.formulas.toroidQ} source="Snelling 1988 (series complex permeability)" validity="μ′ and μ″ at the working frequency; the combination is an upper bound since proximity loss is left out" />
             </Show>
           </ResultRow>
         </Show>
 
+        </Later>
+        <Later>
         <Show when={form() === 'solenoid'}>
           <ResultRow id="out-cself" label="Self-capacitance" symbol="Cₛ" value={d()?.selfCapacitance} unit="F" stale={stale()}>
-            <Formula math={props.cself} source="Medhurst, Wireless Engineer 24, 1947" validity="0.1 ≤ l/D ≤ 50, about ±5 % for his coils; surroundings add to it" />
+            <Formula math={props.formulas.cself} source="Medhurst, Wireless Engineer 24, 1947" validity="0.1 ≤ l/D ≤ 50, about ±5 % for his coils; surroundings add to it" />
           </ResultRow>
           <ResultRow id="out-srf" label="Self-resonant frequency" value={d()?.selfResonantFrequency} unit="Hz" stale={stale()}>
-            <Formula math={props.srf} source="lumped model" validity="an estimate: the winding is really a helical line; keep f below about half of it" />
+            <Formula math={props.formulas.srf} source="lumped model" validity="an estimate: the winding is really a helical line; keep f below about half of it" />
           </ResultRow>
           <ResultRow id="out-lapp" label={`Apparent inductance at ${fText()}`} symbol="L′" value={d()?.apparentInductance} unit="H" stale={stale()} significant={5}>
-            <Formula math={props.apparent} source="Terman, Radio Engineers’ Handbook, 1943" validity="Q ≫ 1 and f well below the self-resonant frequency" />
+            <Formula math={props.formulas.apparent} source="Terman, Radio Engineers’ Handbook, 1943" validity="Q ≫ 1 and f well below the self-resonant frequency" />
           </ResultRow>
         </Show>
 
+        </Later>
+        <Later>
         <NoteList notes={d()?.notes ?? []} />
 
         <Show when={form() === 'solenoid' && d()?.selfResonantFrequency !== undefined}>
@@ -317,7 +354,7 @@ export default function CoilBench(props: CoilFormulas) {
             </Show>
           </Show>
         </section>
-      </div>
-    </div>
+        </Later>
+    </>
   );
 }

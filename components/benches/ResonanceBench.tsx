@@ -21,6 +21,7 @@ import { Field } from '../kit/Field';
 import { defineFields, POSITIVE } from '../kit/fields';
 import { formatShift } from '../kit/format';
 import { Formula } from '../kit/Formula';
+import { createAwake, readEarlyInput } from '../kit/Later';
 import { LinkNotices } from '../kit/LinkNotices';
 import { NoteList } from '../kit/Note';
 import { ResultRow } from '../kit/ResultRow';
@@ -133,8 +134,10 @@ function summaryItems(r: ResonanceResult): SummaryItem[] {
 }
 
 export default function ResonanceBench(props: { formulas: ResonanceFormulas }) {
+  const early = readEarlyInput('resonance');
   const bench = createBenchState<ResonanceSpec>(RESONANCE_FIELDS);
   const notices = createUrlState(bench);
+  const awake = createAwake(() => bench.load(early));
   const calc = bench.compute((spec) => solveResonance(spec));
   const r = calc.result;
   const stale = () => calc.stale();
@@ -147,7 +150,7 @@ export default function ResonanceBench(props: { formulas: ResonanceFormulas }) {
   });
 
   return (
-    <div class="tw-bench" data-bench="resonance">
+    <div class="tw-bench" data-bench="resonance" data-awake={awake() ? '' : undefined}>
       <LinkNotices notices={notices()} />
       <div class="tw-bench-inputs">
         <Field bench={bench} name="solve" />

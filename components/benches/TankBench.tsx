@@ -28,6 +28,7 @@ import { createUrlState } from '../kit/createUrlState';
 import { Field } from '../kit/Field';
 import { formatShift } from '../kit/format';
 import { Formula } from '../kit/Formula';
+import { createAwake, inParts, Later, type BenchParts } from '../kit/Later';
 import { LinkNotices } from '../kit/LinkNotices';
 import { NoteList } from '../kit/Note';
 import { Plot } from '../kit/Plot';
@@ -106,7 +107,11 @@ function summaryItems(a: TankAnalysis): SummaryItem[] {
   return items;
 }
 
-export default function TankBench(props: TankFormulas) {
+/** The island, hydrated in parts (kit/Later): no single task blocks a phone for long. */
+export default inParts('tank', TankBenchParts);
+
+function TankBenchParts(outer: BenchParts<TankFormulas>) {
+  const props = outer.formulas;
   const bench = createBenchState<TankSpec>(TANK_FIELDS);
   /** A coil handed over: its link query (written again by its table) and the greeting. */
   const [coil, setCoil] = createSignal<{ query: string; greeting: string } | null>(null);
@@ -134,6 +139,7 @@ export default function TankBench(props: TankFormulas) {
     },
     linkQuery: () => withCoilLink(bench.linkQuery(), coil()?.query),
   });
+  const awake = createAwake(() => bench.load(outer.early));
   const notices = () => {
     const extra = coilNotice();
     return extra ? [...linkNotices(), extra] : linkNotices();
@@ -233,7 +239,7 @@ export default function TankBench(props: TankFormulas) {
   };
 
   return (
-    <div class="tw-bench tank-bench" data-bench="tank">
+    <div class="tw-bench tank-bench" data-bench="tank" data-awake={awake() ? '' : undefined}>
       <LinkNotices notices={notices()} />
       <Show when={coil()}>
         <p class="tank-handoff" role="status" id="handoff">
@@ -242,6 +248,7 @@ export default function TankBench(props: TankFormulas) {
         </p>
       </Show>
       <div class="tw-bench-inputs">
+        <Later>
         <Field bench={bench} name="mode" />
 
         <fieldset class="tank-group">
@@ -252,7 +259,9 @@ export default function TankBench(props: TankFormulas) {
           <Field bench={bench} name="Rcoil" />
           <Field bench={bench} name="Cself" />
         </fieldset>
+        </Later>
 
+        <Later>
         <fieldset class="tank-group">
           <legend>Capacitor</legend>
           <Field bench={bench} name="C" />
@@ -268,7 +277,9 @@ export default function TankBench(props: TankFormulas) {
           <Field bench={bench} name="Rload" />
           <Field bench={bench} name="f" />
         </fieldset>
+        </Later>
 
+        <Later>
         <details class="tank-group tank-drive" id="drive" open={driveOpen() || driveTrouble()} onToggle={(e) => setDriveOpen(e.currentTarget.open)}>
           <summary>Drive and ratings <span class="tank-optional">(for a driven tank)</span></summary>
           <div class="tank-drive-body">
@@ -280,12 +291,14 @@ export default function TankBench(props: TankFormulas) {
             <Field bench={bench} name="Irating" />
           </div>
         </details>
+        </Later>
         <Show when={bench.generalError()}>
           <p class="tw-bench-error" role="alert">{bench.generalError()}</p>
         </Show>
       </div>
 
       <div class="tw-bench-results" aria-live="polite">
+        <Later>
         <Show when={a()}>
           <Summary items={summaryItems(a()!)} stale={stale()} />
         </Show>
@@ -296,6 +309,8 @@ export default function TankBench(props: TankFormulas) {
             <p>More on the method page: <a href={MATCHING_HREF}>when the terminations collapse the tank</a>.</p>
           </section>
         </Show>
+        </Later>
+        <Later>
         <ResultRow id="out-f" label={shownMode() === 'parallel' ? 'Resonant frequency (|Z| peak)' : 'Resonant frequency (|Z| dip)'} symbol="f" value={a()?.resonantFrequency} unit="Hz" stale={stale()} primary>
           <Formula math={props.frequency} source="Thomson's formula; Terman 1943" validity="peak found from the impedance itself; lumped model, f well below the coil's self-resonance" />
           <Show when={a()}>
@@ -321,6 +336,8 @@ export default function TankBench(props: TankFormulas) {
           </Show>
         </ResultRow>
 
+        </Later>
+        <Later>
         <Show
           when={a()?.transducerLoss !== undefined}
           fallback={<p class="tw-table-note" id="out-loss-none">Give both the source and the load resistance to see the loss from source to load.</p>}
@@ -358,6 +375,8 @@ export default function TankBench(props: TankFormulas) {
           </ResultRow>
         </div>
 
+        </Later>
+        <Later>
         <Show when={driveGiven()} fallback={
           <Show when={ratingsGiven()}>
             <p class="tw-table-note" id="out-stress-none">Give the drive (voltage or power) to check the capacitor and wire against their ratings.</p>
@@ -380,9 +399,11 @@ export default function TankBench(props: TankFormulas) {
           </div>
         </Show>
         <NoteList notes={notes()} />
+        </Later>
       </div>
 
       <section class="tank-plots" aria-label="Sweep plots and downloads">
+        <Later>
         <Show when={r()}>
           <Plot
             id="plot-z"
@@ -420,6 +441,7 @@ export default function TankBench(props: TankFormulas) {
             <span class="tw-table-note">Run the netlist with <code>ngspice -b</code>; it writes frequency, Re Z and Im Z to <code>tankwright-ac.data</code>.</span>
           </div>
         </Show>
+        </Later>
       </section>
     </div>
   );

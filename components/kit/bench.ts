@@ -177,7 +177,8 @@ export function createBenchState<S = SpecObject>(table: FieldTable): BenchState<
     return out as S;
   });
 
-  const computations: Computed<unknown>[] = [];
+  // A signal: a computation may start after the fields that show its errors (a bench hydrating in parts, kit/Later).
+  const [computations, setComputations] = createSignal<readonly Computed<unknown>[]>([]);
   const route = (path: string) => routeDesignError(table, choices(), path);
 
   /** Sets choices; fields still at their default for the old choices take the new default. */
@@ -222,18 +223,18 @@ export function createBenchState<S = SpecObject>(table: FieldTable): BenchState<
         const s = spec();
         return s === undefined ? undefined : run(s, choices());
       }, route);
-      computations.push(c as Computed<unknown>);
+      setComputations((list) => [...list, c as Computed<unknown>]);
       return c;
     },
     designError: (key) => {
-      for (const c of computations) {
+      for (const c of computations()) {
         const m = c.fieldError(key);
         if (m) return m;
       }
       return null;
     },
     generalError: () => {
-      for (const c of computations) {
+      for (const c of computations()) {
         const m = c.generalError();
         if (m) return m;
       }

@@ -148,9 +148,12 @@ const PATH = /^[A-Za-z][A-Za-z0-9_]*(\.[A-Za-z][A-Za-z0-9_]*)*$/;
  * Checks a table once, where it is declared: unique keys, valid keys and
  * paths, choice defaults among their options, value defaults that read as
  * values of the field. Throws an Error naming the field (a programming slip,
- * not a user's).
+ * not a user's). Checks in the build and in tests; the browser's bundle skips them.
  */
 export function defineFields<T extends FieldTable>(table: T): T {
+  // The checks run in the build (server render) and in tests, where a bad table must fail;
+  // a phone loading a bench would only repeat them (parsing every default took 10 ms there).
+  if (!import.meta.env.SSR && !import.meta.env.DEV) return table;
   const keys = new Set<string>();
   const choices = defaultChoices(table);
   for (const f of table) {

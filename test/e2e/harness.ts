@@ -83,9 +83,15 @@ export async function openPage(browser: Browser, url: string, options: { colorSc
   return { page, errors };
 }
 
-/** Waits until the Solid islands on the page have hydrated. */
+/**
+ * Waits until the Solid islands on the page have hydrated, each bench in all
+ * its parts: a bench hydrates in several tasks (kit/Later) and marks its root
+ * data-awake when the last has.
+ */
 export async function hydrated(page: Page): Promise<void> {
-  await page.waitForFunction(() => [...document.querySelectorAll('astro-island')].every((el) => !el.hasAttribute('ssr')));
+  await page.waitForFunction(() =>
+    [...document.querySelectorAll('astro-island')].every((el) => !el.hasAttribute('ssr'))
+    && [...document.querySelectorAll('[data-bench]')].every((el) => el.hasAttribute('data-awake')));
 }
 
 /**

@@ -5,9 +5,10 @@
  * figure per page; it is a report, not a pass/fail gate.
  *
  * Builds nothing: serves dist/ (or TANKWRIGHT_DIST) on loopback.
- * Usage: npm run lighthouse [-- /coil/ /tank/ …] [-- --runs 3] [-- --json]
+ * Usage: npm run lighthouse [-- /coil/ /tank/ …] [-- --runs 3] [-- --json] [-- --detail]
  *   --runs N   runs each page N times and reports the run with the median performance score
  *   --json     prints the rows as JSON
+ *   --detail   also prints, per run, the long tasks Lighthouse counted and the main-thread work by kind
  * CHROME_PATH overrides /usr/bin/chromium.
  *
  * Lighthouse simulates the slow phone from the tasks it observes here, so a
@@ -28,6 +29,7 @@ const args = process.argv.slice(2);
 const flag = (name) => { const i = args.indexOf(name); return i >= 0 ? (args.splice(i, 1), true) : false; };
 const option = (name, dflt) => { const i = args.indexOf(name); return i >= 0 ? args.splice(i, 2)[1] : dflt; };
 const asJson = flag('--json');
+const detail = flag('--detail');
 const runs = Math.max(1, Number(option('--runs', '1')) || 1);
 
 requireBuild();
@@ -87,6 +89,7 @@ try {
       if (!result?.lhr) throw new Error(`Lighthouse returned nothing for ${route}`);
       if (result.lhr.runtimeError) throw new Error(`${route}: ${result.lhr.runtimeError.message}`);
       results.push(figures(route, result.lhr));
+      if (detail) printDetail(route, result.lhr);
     }
     results.sort((a, b) => a.performance - b.performance);
     const row = results[Math.floor((results.length - 1) / 2)];
@@ -98,6 +101,15 @@ try {
   chrome.kill();
   await site.close();
   try { rmSync(profile, { recursive: true, force: true }); } catch { /* Chromium may still hold it */ }
+}
+
+/** --detail: the long tasks Lighthouse counted (as simulated on a phone) and the main-thread work by kind. */
+function printDetail(route, lhr) {
+  const tasks = audit(lhr, 'long-tasks')?.details?.items ?? [];
+  console.log(`${route}: long tasks (simulated ms at start ms, script)`);
+  for (const t of tasks) console.log(`  ${Math.round(t.duration)} ms at ${Math.round(t.startTime)}  ${String(t.url ?? '').replace(origin, '')}`);
+  const work = audit(lhr, 'mainthread-work-breakdown')?.details?.items ?? [];
+  console.log(`  main thread: ${work.map((w) => `${w.groupLabel ?? w.group} ${Math.round(w.duration)}`).join(', ')}`);
 }
 
 function printRow(r, header) {
