@@ -8,7 +8,7 @@
  * builder) and lays out what it returns: the answer first, then the detailed
  * cards with their formulas, the notes, the plot and the hand-off to the tank.
  */
-import { createMemo, Show, untrack, type JSX } from 'solid-js';
+import { createEffect, createMemo, createSignal, Show, untrack, type JSX } from 'solid-js';
 import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
 import { formatNumber, formatQuantity, formatQuantityCompact } from '../../src/quantity';
 import { createBenchState, type BenchState } from '../kit/bench';
@@ -22,7 +22,7 @@ import { LinkNotices } from '../kit/LinkNotices';
 import { NoteList } from '../kit/Note';
 import { Plot } from '../kit/Plot';
 import { ResultRow } from '../kit/ResultRow';
-import { Summary, type SummaryItem } from '../kit/Summary';
+import { AnswerDock, Summary, type DockedAnswer, type SummaryItem } from '../kit/Summary';
 import { designCoilFromFields, tankHandOff } from './coilDesign';
 import { buildCoilSpec, COIL_FIELDS } from './coilFields';
 
@@ -97,7 +97,7 @@ function summaryItems(run: CoilRun): SummaryItem[] {
   const items: SummaryItem[] = [];
   if (d.targetInductance !== undefined) {
     items.push({
-      id: 'sum-turns', label: 'Turns to wind', symbol: 'N', value: d.turns, text: sayTurns(d.turns), main: true,
+      id: 'sum-turns', label: 'Turns to wind', symbol: 'N', short: 'Turns', value: d.turns, text: sayTurns(d.turns), main: true,
       detail: d.exactTurns === undefined ? undefined : `exactly ${formatNumber(d.exactTurns, 4)} give ${formatQuantityCompact(d.targetInductance, 'H', 4)}`,
     });
   }
@@ -105,17 +105,17 @@ function summaryItems(run: CoilRun): SummaryItem[] {
   const atF = d.inductanceAtFrequency !== undefined && d.frequency !== undefined && formatShift(d.inductanceAtFrequency / d.inductance - 1)
     ? `${formatQuantityCompact(d.inductanceAtFrequency, 'H', 4)} at ${hz(d.frequency)}` : undefined;
   items.push({
-    id: 'sum-L', label: d.targetInductance === undefined ? 'Inductance' : 'Inductance as wound', symbol: 'L', value: d.inductance, unit: 'H',
+    id: 'sum-L', label: d.targetInductance === undefined ? 'Inductance' : 'Inductance as wound', symbol: 'L', short: 'Inductance', value: d.inductance, unit: 'H',
     main: d.targetInductance === undefined,
     detail: [shift ? `${shift} from the target` : undefined, atF].filter(Boolean).join('; ') || undefined,
   });
   const q = qWords(d);
   items.push(q
-    ? { id: 'sum-q', label: 'Unloaded Q', value: d.q, text: q.text, detail: q.detail }
-    : { id: 'sum-q', label: 'Unloaded Q', value: undefined, text: 'not estimated', detail: 'measure it: a multilayer winding’s loss depends on how it is laid' });
+    ? { id: 'sum-q', label: 'Unloaded Q', short: 'Q', value: d.q, text: q.text, brief: `${d.form === 'toroid' ? '≤ ' : ''}${sayQ(d.q!)}`, detail: q.detail }
+    : { id: 'sum-q', label: 'Unloaded Q', short: 'Q', value: undefined, text: 'not estimated', brief: '—', detail: 'measure it: a multilayer winding’s loss depends on how it is laid' });
   items.push(d.selfResonantFrequency === undefined
-    ? { id: 'sum-srf', label: 'Self-resonance', value: undefined, text: 'not estimated', detail: `not modelled for a ${d.form === 'toroid' ? 'toroid' : 'multilayer coil'}` }
-    : { id: 'sum-srf', label: 'Self-resonance', value: d.selfResonantFrequency, unit: 'Hz', detail: `self-capacitance ${formatQuantityCompact(d.selfCapacitance!, 'F', 3)}` });
+    ? { id: 'sum-srf', label: 'Self-resonance', short: 'SRF', value: undefined, text: 'not estimated', brief: '—', detail: `not modelled for a ${d.form === 'toroid' ? 'toroid' : 'multilayer coil'}` }
+    : { id: 'sum-srf', label: 'Self-resonance', short: 'SRF', value: d.selfResonantFrequency, unit: 'Hz', detail: `self-capacitance ${formatQuantityCompact(d.selfCapacitance!, 'F', 3)}` });
   items.push({ id: 'sum-wire', label: 'Wire to cut', symbol: 'ℓ', value: d.wireLength, unit: 'm', significant: 3, detail: `${wireWords(run).split(':')[0]}; both leads included` });
   return items;
 }
@@ -128,6 +128,7 @@ function CoilBenchParts(outer: BenchParts<CoilFormulas>) {
   const bench = createBenchState(COIL_FIELDS);
   const notices = createUrlState(bench);
   const awake = createAwake(() => bench.load(outer.early));
+  const [answer, setAnswer] = createSignal<DockedAnswer>();
 
   return (
     <div class="tw-bench tw-coil" data-bench="coil" data-awake={awake() ? '' : undefined}>
@@ -167,11 +168,12 @@ function CoilBenchParts(outer: BenchParts<CoilFormulas>) {
         <Show when={bench.generalError()}>
           <p class="tw-bench-error" role="alert">{bench.generalError()}</p>
         </Show>
+        <AnswerDock answer={answer()} />
       </div>
 
       <div class="tw-bench-results" aria-live="polite">
         <Later>
-          <CoilResults bench={bench} formulas={props} />
+          <CoilResults bench={bench} formulas={props} onAnswer={setAnswer} />
         </Later>
       </div>
     </div>
@@ -179,7 +181,7 @@ function CoilBenchParts(outer: BenchParts<CoilFormulas>) {
 }
 
 /** The results: the computation (designCoil through the field table) and its layout, answer first. */
-function CoilResults(props: { bench: BenchState; formulas: CoilFormulas }) {
+function CoilResults(props: { bench: BenchState; formulas: CoilFormulas; onAnswer: (answer: DockedAnswer | undefined) => void }) {
   const bench = props.bench;
   const calc = bench.compute((raw, choices) => runCoil(raw, choices, untrack(() => bench.linkQuery())));
   const r = calc.result;
@@ -190,6 +192,8 @@ function CoilResults(props: { bench: BenchState; formulas: CoilFormulas }) {
   const form = () => d()?.form;
   const fText = () => (d()?.frequency === undefined ? 'f' : hz(d()!.frequency!));
 
+  const items = createMemo(() => (r() ? summaryItems(r()!) : undefined));
+  createEffect(() => props.onAnswer(items() && { items: items()!, stale: stale() }));
   const handOff = createMemo(() => (r() ? tankHandOff(r()!.design, r()!.query) : undefined));
   const plotScale = createMemo(() => {
     const l = d()?.inductance ?? 1e-6;
@@ -202,7 +206,7 @@ function CoilResults(props: { bench: BenchState; formulas: CoilFormulas }) {
     <>
         <Later>
         <Show when={r()}>
-          <Summary items={summaryItems(r()!)} stale={stale()} />
+          <Summary items={items()!} stale={stale()} />
         </Show>
         <p class="tw-coil-wire-summary" id="out-wire-size">Wire: {r() ? wireWords(r()!) : ''}</p>
 

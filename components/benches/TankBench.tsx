@@ -33,7 +33,7 @@ import { LinkNotices } from '../kit/LinkNotices';
 import { NoteList } from '../kit/Note';
 import { Plot } from '../kit/Plot';
 import { ResultRow } from '../kit/ResultRow';
-import { Summary, type SummaryItem } from '../kit/Summary';
+import { AnswerDock, Summary, type SummaryItem } from '../kit/Summary';
 import {
   collapseNoteOf, DRIVE_KEYS, handOffGreeting, readCoilLink, splitCoilLink, stressOf, sweepSpan, SWEEP_POINTS, TANK_FIELDS,
   tankOf, withCoilLink, type TankSpec,
@@ -93,9 +93,9 @@ function summaryItems(a: TankAnalysis): SummaryItem[] {
     loadedShift ? `loaded: ${fmtF(a.loadedResonantFrequency)}` : null,
   ].filter(Boolean).join('; ');
   const items: SummaryItem[] = [
-    { id: 'sum-f', label: parallel ? 'Resonance (|Z| peak)' : 'Resonance (|Z| dip)', symbol: 'f', value: a.resonantFrequency, unit: 'Hz', main: true, detail: resonance },
+    { id: 'sum-f', label: parallel ? 'Resonance (|Z| peak)' : 'Resonance (|Z| dip)', symbol: 'f', short: 'Resonance', value: a.resonantFrequency, unit: 'Hz', main: true, detail: resonance },
     { id: 'sum-ql', label: 'Loaded Q', value: a.loadedQ, detail: `unloaded ${fmtQ(a.unloadedQ)}` },
-    { id: 'sum-bw', label: 'Bandwidth, −3 dB', symbol: 'B', value: a.bandwidth, unit: 'Hz', detail: `${fmtF(a.lowerFrequency)} to ${fmtF(a.upperFrequency)}` },
+    { id: 'sum-bw', label: 'Bandwidth, −3 dB', symbol: 'B', short: 'BW', value: a.bandwidth, unit: 'Hz', detail: `${fmtF(a.lowerFrequency)} to ${fmtF(a.upperFrequency)}` },
     {
       id: 'sum-rd', label: parallel ? 'Dynamic resistance' : 'Resistance at resonance', value: a.dynamicResistance, unit: 'Ω',
       text: Number.isFinite(a.dynamicResistance) ? undefined : '∞', detail: parallel ? 'the tank alone, at its peak' : 'the tank alone',
@@ -176,6 +176,7 @@ function TankBenchParts(outer: BenchParts<TankFormulas>) {
   /** A message at a field of the drive section opens it, so it is never hidden. */
   const driveTrouble = () => DRIVE_KEYS.some((k) => bench.uses(k) && (bench.field(k).error() !== null || bench.designError(k) !== null));
 
+  const items = createMemo(() => (a() ? summaryItems(a()!) : undefined));
   const collapse = createMemo(() => {
     const an = a();
     return an ? collapseNoteOf(an) : undefined;
@@ -295,12 +296,13 @@ function TankBenchParts(outer: BenchParts<TankFormulas>) {
         <Show when={bench.generalError()}>
           <p class="tw-bench-error" role="alert">{bench.generalError()}</p>
         </Show>
+        <AnswerDock answer={items() && { items: items()!, stale: stale() }} />
       </div>
 
       <div class="tw-bench-results" aria-live="polite">
         <Later>
         <Show when={a()}>
-          <Summary items={summaryItems(a()!)} stale={stale()} />
+          <Summary items={items()!} stale={stale()} />
         </Show>
         <Show when={collapse()}>
           <section class="tank-collapse" id="collapse" aria-labelledby="collapse-title" classList={{ 'tw-result--stale': stale() }}>

@@ -16,6 +16,10 @@ export interface SummaryItem extends Pick<ResultRowProps, 'id' | 'label' | 'symb
   detail?: string;
   /** The main answer: shown larger. */
   main?: boolean;
+  /** Its name in the answer dock ("Q", "SRF"); the symbol or label when absent. */
+  short?: string;
+  /** Its value in the answer dock, when `text` is too long for it ("152" for "152 (130–171)"). */
+  brief?: string;
 }
 
 export interface SummaryProps {
@@ -56,5 +60,46 @@ export function Summary(props: SummaryProps) {
         </For>
       </dl>
     </section>
+  );
+}
+
+/** What the answer dock shows: the summary's items and whether they are stale. */
+export interface DockedAnswer {
+  items: readonly SummaryItem[];
+  stale: boolean;
+}
+
+/**
+ * The answer, docked at the foot of the screen while a phone shows the
+ * fields: the summary's first three figures, following what is typed; a tap
+ * scrolls to the summary. It sits at the end of the bench's inputs and sticks
+ * to the bottom while they scroll (CSS sticky), so it leaves by itself where
+ * the summary begins; from 52rem up the summary sits beside the fields and
+ * the dock is hidden. Its box has a fixed height: filling it moves nothing.
+ *
+ * It repeats, for the eye, what the summary says; screen readers and the
+ * keyboard have the summary itself (announced as it changes), so the dock is
+ * hidden from them and is no tab stop: a control there would sit over the
+ * fields it floats above.
+ */
+export function AnswerDock(props: { answer: DockedAnswer | undefined; target?: string }) {
+  const shown = () => props.answer?.items.slice(0, 3) ?? [];
+  const go = () => document.getElementById(props.target ?? 'summary')?.scrollIntoView({ block: 'start' });
+  return (
+    <div class="tw-dock" classList={{ 'tw-dock--stale': !!props.answer?.stale }} id="answer-dock" aria-hidden="true" onClick={go}>
+      <span class="tw-dock-items">
+        <Show when={shown().length > 0} fallback={<span class="tw-dock-item"><span class="tw-dock-value">The answer is below</span></span>}>
+          <For each={shown()}>
+            {(item) => (
+              <span class="tw-dock-item">
+                <span class="tw-dock-label">{item.short ?? item.symbol ?? item.label}</span>
+                <span class="tw-dock-value">{item.brief ?? item.text ?? formatResult(item.value, item.unit, item.significant)}</span>
+              </span>
+            )}
+          </For>
+        </Show>
+      </span>
+      <span class="tw-dock-go">↓</span>
+    </div>
   );
 }

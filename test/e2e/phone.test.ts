@@ -10,7 +10,7 @@ import { readdirSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { browserAvailable, DIST, hydrated, useSiteAndBrowser } from './harness';
+import { browserAvailable, DIST, hydrated, retype, useSiteAndBrowser } from './harness';
 
 const PHONE = { width: 390, height: 844 };
 
@@ -89,6 +89,44 @@ describe.runIf(browserAvailable())('pages on a 390 px phone', () => {
     const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
     expect(await shiftWhileLoading(await context.newPage(), env.site.origin + route)).toBeLessThan(0.01);
     await context.close();
+  });
+
+  it.each([
+    ['/coil/', 'L', '2u2', ['sum-turns', 'sum-L', 'sum-q']],
+    ['/tank/', 'C', '220p', ['sum-f', 'sum-ql', 'sum-bw']],
+  ])('%s keeps the answer in sight while the fields scroll, and follows the typing', async (route, field, text, ids) => {
+    const context = await env.browser.newContext({ viewport: PHONE, isMobile: true, hasTouch: true });
+    const page = await context.newPage();
+    await page.goto(`${env.site.origin}${route}`, { waitUntil: 'networkidle' });
+    await hydrated(page);
+    const dock = page.locator('#answer-dock');
+    const docked = () => dock.locator('.tw-dock-value').allTextContents();
+    const summary = async () => Promise.all(ids.map((id) => page.locator(`#${id} output`).textContent()));
+    // Halfway down the fields: the dock sits on the bottom edge of the screen, the summary is far below
+    await page.evaluate(() => window.scrollTo(0, 700));
+    await page.waitForTimeout(100);
+    const box = (await dock.boundingBox())!;
+    expect(Math.abs(box.y + box.height - PHONE.height)).toBeLessThan(2);
+    expect((await page.locator('#summary').boundingBox())!.y).toBeGreaterThan(PHONE.height);
+    expect(await docked()).toEqual((await summary()).map((t) => t!.replace(/ \(.*\)$/, '')));
+    // It follows what is typed, and dims with the summary when the input is not a value
+    await retype(page, field, text);
+    await expect.poll(async () => (await docked()).join('|')).toBe((await summary()).map((t) => t!.replace(/ \(.*\)$/, '')).join('|'));
+    await retype(page, field, '-1');
+    await expect.poll(() => dock.getAttribute('class')).toContain('tw-dock--stale');
+    await retype(page, field, text);
+    // A tap takes the reader to the summary; the dock repeats it for the eye only (hidden from screen readers, no tab stop)
+    expect(await dock.getAttribute('aria-hidden')).toBe('true');
+    expect(await dock.locator('a, button, input, [tabindex]').count()).toBe(0);
+    await dock.click();
+    await expect.poll(async () => Math.abs((await page.locator('#summary').boundingBox())!.y)).toBeLessThan(PHONE.height / 2);
+    await context.close();
+    // On a wide screen the summary sits beside the fields, and there is no dock
+    const wide = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const desk = await wide.newPage();
+    await desk.goto(`${env.site.origin}${route}`, { waitUntil: 'networkidle' });
+    expect(await desk.locator('#answer-dock').isVisible()).toBe(false);
+    await wide.close();
   });
 
   it('a formula wider than the screen scrolls inside its own box', async () => {
