@@ -71,7 +71,7 @@ export function eSeries(series: ESeriesName): readonly number[] {
 }
 
 /** Rounds away binary noise from mantissa × 10^k (e.g. 4.7e-12 stays 4.7e-12). */
-export function tidyValue(x: number): number {
+function tidyValue(x: number): number {
   return Number(x.toPrecision(12));
 }
 
