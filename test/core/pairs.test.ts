@@ -76,6 +76,15 @@ describe('resonantPairs: ranking', () => {
     const best = r.candidates[0];
     near(best.frequency, thomson(best.inductor.inductance, best.capacitance + 12e-12 + best.inductor.selfCapacitance), 1e-12);
   });
+  it('warns when a shop coil is used above half its self-resonance', () => {
+    // invented coil: 4.2 µH with 60 pF of its own self-resonates at 1/(2π√(LC)) ≈ 10.0 MHz;
+    // the lumped model holds below half of that (common practice, no published source)
+    const srf = thomson(4.2e-6, 60e-12);
+    expect(srf).toBeLessThan(2 * 7.1e6);
+    const r = resonantPairs({ ...spec, shopCoils: [{ name: 'heavy former', inductance: 4.2e-6, selfCapacitance: 60e-12 }] });
+    expect(r.notes.some((n) => n.level === 'validity' && n.field === 'shopCoils' && /heavy former/.test(n.message))).toBe(true);
+    expect(resonantPairs({ ...spec, shopCoils }).notes.some((n) => n.level === 'validity')).toBe(false);
+  });
   it('ranks a shop coil first when it hits the target exactly', () => {
     // invented coil: L chosen so that 150 pF + 12 pF strays + 3 pF own resonate at 7.1 MHz
     const l = 1 / ((2 * Math.PI * 7.1e6) ** 2 * 165e-12);
