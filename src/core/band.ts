@@ -419,9 +419,9 @@ export interface SlugTuningInput {
 
 /** The slug's setting for a band, from `slugTuning`. */
 export interface SlugSetting {
-  /** Inductance that puts the capacitor's low end exactly on the band's low end, H (the largest that still covers). */
+  /** Inductance that puts the capacitor's low end exactly on the band's low end, H (the smallest that still covers). */
   inductanceForLowEnd: number;
-  /** Inductance that puts the capacitor's high end exactly on the band's high end, H (the smallest that still covers). */
+  /** Inductance that puts the capacitor's high end exactly on the band's high end, H (the largest that still covers). */
   inductanceForHighEnd: number;
   /** Inductance to set: the window's geometric middle (equal spare at both ends), clamped to the slug's range, H. */
   inductance: number;
@@ -477,7 +477,7 @@ function inductanceRange(input: SlugTuningInput): { lo: number; hi: number } {
  * every frequency by √(L/L'): it moves the band without changing its ratio,
  * which the capacitor network alone sets. Returns the band at both slug ends,
  * everything reachable, and, for a band given, the inductance window that
- * covers it, L from 1/((2π f_high)² C(C_min)) to 1/((2π f_low)² C(C_max)),
+ * covers it, L from 1/((2π f_low)² C(C_max)) to 1/((2π f_high)² C(C_min)),
  * and the setting in the window's geometric middle. Lumped and lossless.
  * @param input capacitances in F, inductances in H, band in Hz
  * @throws DesignError naming the input at fault; `highFrequency` when the capacitor's ratio cannot cover the band
@@ -506,12 +506,12 @@ export function slugTuning(input: SlugTuningInput): SlugTuning {
   const lForLow = partnerAt(slugIn.lowEndCapacitance, band.low);
   const lForHigh = partnerAt(slugIn.highEndCapacitance, band.high);
   const needed = band.high / band.low;
-  if (lForHigh > lForLow * (1 + LIMIT_TOLERANCE)) {
+  if (lForLow > lForHigh * (1 + LIMIT_TOLERANCE)) {
     throw new DesignError('highFrequency', `The band ${sayQuantity(band.low, 'Hz', 4)} to ${sayQuantity(band.high, 'Hz', 4)} needs a frequency ratio of ${sayNumber(needed, 4)}, but the capacitor${n.trimmer > 0 || n.padder !== undefined ? ' with its trimmer and padder' : ''} gives ${sayNumber(capacitorRatio, 4)}: a slug moves the band but cannot widen it. Use less trimmer or padder, a larger capacitor, fewer strays, or split the band.`);
   }
   const middle = Math.sqrt(lForLow * lForHigh);
-  const inductance = Math.min(Math.max(middle, lo, lForHigh), hi, lForLow);
-  const within = lo <= lForLow && hi >= lForHigh;
+  const inductance = Math.min(Math.max(middle, lo, lForLow), hi, lForHigh);
+  const within = lo <= lForHigh && hi >= lForLow;
   const at = coverageOf(n, within ? inductance : middle);
   const spare = Math.min(band.low / at.lowFrequency, at.highFrequency / band.high) - 1;
   result.setting = {
@@ -524,8 +524,8 @@ export function slugTuning(input: SlugTuningInput): SlugTuning {
     withinSlugRange: within,
   };
   if (!within) {
-    const short = lForHigh > hi ? `it needs at least ${sayQuantity(lForHigh, 'H', 4)}, but the slug fully in gives ${sayQuantity(hi, 'H', 4)}: add turns` : `it needs at most ${sayQuantity(lForLow, 'H', 4)}, but the slug fully out gives ${sayQuantity(lo, 'H', 4)}: take off turns`;
-    notes.push(note('caution', `The slug cannot set this band: ${short}.`, hi < lForHigh ? 'maxInductance' : 'minInductance'));
+    const short = lForLow > hi ? `it needs at least ${sayQuantity(lForLow, 'H', 4)}, but the slug fully in gives ${sayQuantity(hi, 'H', 4)}: add turns` : `it needs at most ${sayQuantity(lForHigh, 'H', 4)}, but the slug fully out gives ${sayQuantity(lo, 'H', 4)}: take off turns`;
+    notes.push(note('caution', `The slug cannot set this band: ${short}.`, lForLow > hi ? 'maxInductance' : 'minInductance'));
   }
   notes.push(note('info', 'A slug moves both ends of the band together; the capacitor network sets the band\'s width. The usual alignment sets the low end with the slug and the high end with the trimmer (common practice, no published source).'));
   return result;
@@ -618,7 +618,7 @@ function checkTable(table: unknown[]): PlatePoint[] {
  * one-sided slopes at the ends; cubic Hermite pieces between. Never overshoots
  * the table, so a monotonic table gives a monotonic curve.
  */
-export function monotoneInterpolator(xs: readonly number[], ys: readonly number[]): (x: number) => number {
+function monotoneInterpolator(xs: readonly number[], ys: readonly number[]): (x: number) => number {
   const n = xs.length;
   const h: number[] = [];
   const d: number[] = [];
