@@ -42,15 +42,19 @@
  * points make its largest value over the band the smallest possible
  * (Chebyshev's minimax property of the interpolation nodes; e.g. Burden &
  * Faires, *Numerical Analysis*, the section on Chebyshev polynomials). The
- * handbooks' rule of thumb is the same idea: points near, but inside, both
- * ends and one near the middle. The caller may give their own three points.
+ * handbooks' rule of thumb is the same idea (from memory): points near, but
+ * inside, both ends and one near the middle. The real error is lopsided (for
+ * medium wave it is largest at the low end), so the placement is near the
+ * best, not the best; the caller may give their own three points.
  *
  * Error curve. At each signal frequency f of the band the oscillator runs at
  * f_o(C(f)); the error is f_o minus the frequency that would give exactly the
  * IF (f + IF above, f − IF below). It is the amount by which the signal
  * circuit is off-tune from the station the set actually receives. It is zero
- * at the three tracking points, changes sign at each, has one extreme between
- * neighbouring points and grows beyond the outer points.
+ * at the three tracking points, changes sign at each, and in practice has one
+ * extreme between neighbouring points and grows beyond the outer points. The
+ * largest error is the largest |error| of the samples, refined by a
+ * golden-section search between the best sample's neighbours.
  *
  * Image. The image of signal f is f + 2·IF (oscillator above) or |f − 2·IF|
  * (oscillator below), for the tank model's image rejection.
