@@ -15,8 +15,13 @@ export {
   capacitiveReactance,
   characteristicImpedance,
 } from './resonance';
-export { E_SERIES, preferredNeighbours } from './preferred';
+export { E_SERIES, E_SERIES_NAMES, eSeries, nearestPreferredValue, preferredNeighbours, requireSeries, seriesValuesBetween } from './preferred';
 export type { ESeriesName, PreferredNeighbours } from './preferred';
+export { resonantPairs, toleranceSpread } from './pairs';
+export type {
+  ShopCoil, PairSearch, PairSearchResult, PairCandidate, TrimmerRange, ToleranceSpread, ToleranceSpreadSamples, ToleranceSpreadSpec,
+  MonteCarloSummary, PairDistribution, InductorSeries,
+} from './pairs';
 export { ellipticK, ellipticE, ellipticD } from './elliptic';
 export {
   awgDiameter,

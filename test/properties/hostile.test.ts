@@ -70,6 +70,21 @@ const TABLE: Record<string, Entry> = {
   capacitiveReactance: { calls: [[7e6, 100e-12]] },
   characteristicImpedance: { calls: [[4.7e-6, 100e-12]] },
   preferredNeighbours: { calls: [[106.9e-12, 'E12'], [4.7e-6]] },
+  eSeries: { calls: [['E96'], ['E12']] },
+  nearestPreferredValue: { calls: [[106.9e-12, 'E24'], [4.4e-6]] },
+  seriesValuesBetween: { calls: [['E12', 10e-12, 1e-9]] },
+  requireSeries: { calls: [['series', 'E192']] },
+  // pairs: demo values (invented), a 7.1 MHz tank and a 5.9–6.2 MHz band with one coil of a fictional shop
+  resonantPairs: {
+    calls: [
+      [{ frequency: 7.1e6, strayCapacitance: 12e-12, samples: 50, count: 3 }],
+      [{
+        lowFrequency: 5.9e6, highFrequency: 6.2e6, capacitorSeries: 'E24', inductorSeries: 'none', shopCoils: [{ name: 'demo coil', inductance: 4.2e-6, selfCapacitance: 2.5e-12 }],
+        strayCapacitance: 10e-12, reactanceRange: { minimum: 10, maximum: 3000 }, capacitanceTolerance: 0.05, inductanceTolerance: 0.05, strayTolerance: 0.25, count: 3, samples: 20, seed: 7, distribution: 'normal',
+      }],
+    ],
+  },
+  toleranceSpread: { calls: [[{ inductance: 4.7e-6, capacitance: 100e-12, strayCapacitance: 12e-12, selfCapacitance: 3e-12, inductanceTolerance: 0.05, capacitanceTolerance: 0.05, strayTolerance: 0.25, samples: 50, seed: 3, distribution: 'normal' }]] },
   complex: { calls: [[3, 4], [3]] },
   cAdd: { calls: [[z(1, 2), z(3, -1)]] },
   cSub: { calls: [[z(1, 2), z(3, -1)]] },
