@@ -18,6 +18,8 @@ export {
 export { E_SERIES, E_SERIES_NAMES, eSeries, nearestPreferredValue, preferredNeighbours, requireSeries, seriesValuesBetween } from './preferred';
 export type { ESeriesName, PreferredNeighbours } from './preferred';
 export { resonantPairs, toleranceSpread } from './pairs';
+export { trackingPoints, designTracking, trackingError } from './tracking';
+export type { TrackingCircuit, TrackingInput, TrackingCurve, TrackingExtreme, TrackingCurveInput, TrackingErrorResult, TrackingDesign } from './tracking';
 export type {
   ShopCoil, PairSearch, PairSearchResult, PairCandidate, TrimmerRange, ToleranceSpread, ToleranceSpreadSamples, ToleranceSpreadSpec,
   MonteCarloSummary, PairDistribution, InductorSeries,

@@ -44,6 +44,9 @@ const toroidCore = { outerDiameter: 12.7e-3, innerDiameter: 7.7e-3, height: 4.9e
 const solenoid = { diameter: 20e-3, turns: 20, pitch: 1e-3, wireDiameter: 0.5e-3 };
 const coilLoss = { frequency: 7e6, turns: 20, diameter: 20e-3, pitch: 1e-3, wireDiameter: 0.5e-3 };
 const multilayer = { diameter: 20e-3, length: 10e-3, windingDepth: 5e-3 };
+// tracking (demo values, invented: a 530–1600 kHz set, IF 455 kHz, 10–365 pF gang)
+const trackingDemo = { lowFrequency: 530e3, highFrequency: 1600e3, intermediateFrequency: 455e3, oscillatorSide: 'above', signal: { inductance: 230e-6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, trimmerCapacitance: 20e-12 }, points: 21 };
+const trackingOscillator = { inductance: 125.5e-6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, trimmerCapacitance: 28.6e-12, padderCapacitance: 384e-12 };
 /** Q figures an ideal part or a missing termination makes Infinity (TankAnalysis). */
 const TANK_INFINITE = ['coilQ', 'capacitorQ', 'unloadedQ', 'externalQ', 'dynamicResistance'];
 
@@ -84,6 +87,9 @@ const TABLE: Record<string, Entry> = {
       }],
     ],
   },
+  trackingPoints: { calls: [[530e3, 1600e3]] },
+  designTracking: { calls: [[trackingDemo], [{ ...trackingDemo, oscillatorStrayCapacitance: 0, trackingFrequencies: [600e3, 950e3, 1500e3] }]] },
+  trackingError: { calls: [[{ ...trackingDemo, oscillator: trackingOscillator }]] },
   toleranceSpread: { calls: [[{ inductance: 4.7e-6, capacitance: 100e-12, strayCapacitance: 12e-12, selfCapacitance: 3e-12, inductanceTolerance: 0.05, capacitanceTolerance: 0.05, strayTolerance: 0.25, samples: 50, seed: 3, distribution: 'normal' }]] },
   complex: { calls: [[3, 4], [3]] },
   cAdd: { calls: [[z(1, 2), z(3, -1)]] },
