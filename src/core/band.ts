@@ -79,6 +79,9 @@ const LARGE_TRIMMER = 50e-12;
 /** Narrowest band accepted, as a fraction of its low frequency: narrower is a spot frequency. */
 const NARROWEST_BAND = 1e-6;
 
+/** Frequencies across the band at which `bandSelectivity` asks designCoil for the coil's Q (odd: the middle is one). */
+const COIL_Q_NODES = 9;
+
 /** Relative tolerance for the limit case where the capacitor's ratio just covers the band. */
 const LIMIT_TOLERANCE = 1e-12;
 
@@ -721,7 +724,9 @@ export interface BandSelectivityInput {
   /**
    * The coil as for `designCoil` (form, geometry, wire; its inductance,
    * turns, frequency and sweepPoints are set here): wound once for the band's
-   * inductance at mid-band, its Q is then taken at each frequency.
+   * inductance at mid-band, its Q is then taken from designCoil at 9 frequencies
+   * across the band (exact there, including low, middle and high) and
+   * interpolated between them (monotone cubic).
    */
   coil?: DesignCoilSpec;
   /** The coil's Q, instead of (or overriding the Q of) the coil spec; held constant across the band. */
@@ -783,7 +788,8 @@ function under<T>(prefix: string, fn: () => T): T {
  * Q, bandwidth and dynamic resistance across the band: at each frequency f
  * the tank is the band's coil L with the capacitor network set to
  * C = 1/((2π f)² L) − C_s, the strays across the coil, the coil's Q at f
- * (from `designCoil`'s loss model for the coil wound once, or `coilQ`), the
+ * (from `designCoil`'s loss model for the coil wound once, at 9 frequencies
+ * evenly across the band with monotone cubic interpolation between; or `coilQ`), the
  * capacitors' Q, and the source and load; `analyzeTank` computes the rest.
  * Models and validity: those of `designCoil` and `analyzeTank`.
  * @param input the band circuit, the coil spec or Q, capacitor loss, terminations in Ω
@@ -817,9 +823,13 @@ export function bandSelectivity(input: BandSelectivityInput): BandSelectivity {
     if (fixedQ === undefined && wound.q === undefined) {
       throw new DesignError('coilQ', `The ${wound.form} model gives no Q for this coil: give the coil's Q (measured or estimated).`);
     }
-    qAt = fixedQ !== undefined
-      ? () => fixedQ
-      : (f) => under('coil', () => designCoil({ ...base, turns, frequency: f } as DesignCoilSpec).q as number);
+    if (fixedQ !== undefined) qAt = () => fixedQ;
+    else {
+      // designCoil at a few frequencies, monotone cubic between: Q varies smoothly across a band (about as √f).
+      const nodes = Array.from(frequencyGrid({ start: cover.lowFrequency, stop: cover.highFrequency, points: COIL_Q_NODES, spacing: 'linear' }));
+      const qs = nodes.map((f) => under('coil', () => designCoil({ ...base, turns, frequency: f } as DesignCoilSpec).q as number));
+      qAt = monotoneInterpolator(nodes, qs);
+    }
     const off = wound.inductance / l - 1;
     if (Math.abs(off) > 1e-3) {
       notes.push(note('info', `Wound with ${sayNumber(turns)} turns the coil has ${sayQuantity(wound.inductance, 'H', 4)}, ${sayPercent(off)} from the ${sayQuantity(l, 'H', 4)} the band needs: the trimmer or a slug takes up the difference.`, 'coil.inductance'));

@@ -14,6 +14,7 @@ import {
   bandCoverage, bandSelectivity, designForBand, dialLaw, slugTuning, PADDER_SWITCH_RATIO,
   type BandCircuit,
 } from '../../src/core/band';
+import { designCoil } from '../../src/core/coil';
 import { DesignError } from '../../src/core/errors';
 import { fieldOf, rel, thomson } from '../helpers/asserts';
 
@@ -382,6 +383,19 @@ describe('bandSelectivity', () => {
     // a copper solenoid's Q rises with frequency across a narrow band (R_ac ∝ √f: Q ∝ √f, Terman 1943)
     expect(s.high.coilQ).toBeGreaterThan(s.low.coilQ);
     expect(rel(s.high.coilQ / s.low.coilQ, Math.sqrt(6.2 / 5.9))).toBeLessThan(0.02);
+  });
+
+  it('the coil\'s Q between designCoil\'s nodes is interpolated to within 0.1 % of designCoil itself, on a 3.3:1 band', () => {
+    const wide = designForBand({ ...demo, lowFrequency: 530e3, highFrequency: 1700e3 });
+    const big = { form: 'solenoid' as const, diameter: 40e-3, pitch: 0.4e-3, wire: { diameter: 0.3e-3, insulatedDiameter: 0.35e-3 } };
+    const s = bandSelectivity({ band: wide, coil: big, points: 23 });
+    const turns = s.coil!.turns;
+    for (let i = 0; i < 23; i += 2) {
+      const exact = designCoil({ ...big, turns, frequency: s.curve.frequency[i] }).q as number;
+      expect(rel(s.curve.coilQ[i], exact)).toBeLessThan(1e-3);
+    }
+    // exact at the reported points
+    expect(rel(s.middle.coilQ, designCoil({ ...big, turns, frequency: s.middle.frequency }).q as number)).toBeLessThan(1e-12);
   });
 
   it('with a fixed coil Q and ideal capacitors the unloaded Q is the coil\'s (1/Q = Σ 1/Q_i, Pozar)', () => {
