@@ -345,7 +345,7 @@ export function designForBand(input: BandDesignInput): BandDesign {
       trimmer = 0;
       notes.push(note('info', `${ratioText} is all this capacitor gives with ${sayQuantity(n.stray, 'F')} of strays (${sayNumber(widestRatio, 4)}): no trimmer is needed and none is left for alignment. Any more stray capacitance will lose the band's high end; set the band with a slug in the coil, or allow a margin.`, 'highFrequency'));
     } else {
-      notes.push(note('info', `${ratioText} is narrower than this capacitor's ${sayNumber(widestRatio, 4)} (with the strays): a parallel trimmer of ${sayQuantity(trimmer, 'F')} narrows its swing to the band, and the whole rotation covers it. No padder: the trimmer and strays together (${sayQuantity(c0, 'F')}) stay within the capacitor's maximum ${sayQuantity(n.max, 'F')}${c0 > limit ? ', or a trimmer alone was asked for' : ''}.`));
+      notes.push(note('info', `${ratioText} is narrower than this capacitor's ${sayNumber(widestRatio, 4)} (with the strays): a parallel trimmer of ${sayQuantity(trimmer, 'F')} narrows its swing to the band, and the whole rotation covers it. ${c0 > limit ? 'No padder, as asked.' : `No padder: the trimmer and strays together (${sayQuantity(c0, 'F')}) stay within the capacitor's maximum ${sayQuantity(n.max, 'F')}.`}`));
     }
     if (c0 > limit) {
       notes.push(note('info', `A trimmer alone needs ${sayQuantity(c0, 'F')} in parallel, ${sayNumber(c0 / n.max)} times the capacitor's maximum: most of the tank's capacitance is fixed, so the coil is small and the fixed capacitor's tolerance and drift move the band more than the variable tunes it. The "auto" arrangement would add a series padder.`, 'arrangement'));
@@ -360,7 +360,7 @@ export function designForBand(input: BandDesignInput): BandDesign {
     const qd = n.stray * a * b;
     padder = (qb + Math.sqrt(qb * qb + 4 * qa * qd)) / (2 * qa);
     const trimmerOnlyL = 1 / (TWO_PI * f2) / (TWO_PI * f2 * (n.min + c0));
-    notes.push(note('info', `${ratioText} is much narrower than this capacitor's ${sayNumber(widestRatio, 4)}: a trimmer alone would need ${sayQuantity(c0, 'F')} in parallel (${sayNumber(c0 / n.max)} times the capacitor's maximum) and a coil of only ${sayQuantity(trimmerOnlyL, 'H')}. So the parallel capacitance (trimmer ${sayQuantity(trimmer, 'F')} with the strays) is held at the capacitor's maximum, and a series padder of ${sayQuantity(padder, 'F')} narrows the swing to the band, keeping the whole rotation on it (band-spread).`));
+    notes.push(note('info', `${ratioText} is much narrower than this capacitor's ${sayNumber(widestRatio, 4)}: a trimmer alone would need ${sayQuantity(c0, 'F')} in parallel (${sayNumber(c0 / n.max)} times the capacitor's maximum) and a coil of only ${sayQuantity(trimmerOnlyL, 'H')}. So the parallel capacitance (trimmer ${sayQuantity(trimmer, 'F')} with the strays) is held at the capacitor's maximum, and a series padder of ${sayQuantity(padder, 'F')} narrows the swing to the band, keeping the whole rotation on it (band-spread). Holding the parallel capacitance at the trimmer-only limit keeps the coil large and makes the design continuous with the trimmer-only one at the switch-over.`));
   }
   const circuit: Network = { ...n, trimmer, padder };
   const highEndCapacitance = totalCapacitance(circuit, n.min);

@@ -10,6 +10,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { create, all } from 'mathjs';
+import fc from 'fast-check';
 import {
   bandCoverage, bandSelectivity, designForBand, dialLaw, slugTuning, PADDER_SWITCH_RATIO,
   type BandCircuit,
@@ -242,6 +243,38 @@ describe('designForBand', () => {
     expect(fieldOf(() => designForBand({ ...demo, highFrequency: 5.9e6 * (1 + 1e-8) }))).toBe('highFrequency');
     expect(fieldOf(() => designForBand({ ...demo, arrangement: 'padder' as 'auto' }))).toBe('arrangement');
     expect(fieldOf(() => designForBand({ ...demo, lowFrequency: '5.9M' as unknown as number }))).toBe('lowFrequency');
+  });
+});
+
+describe('designForBand over random bands and capacitors (fast-check)', () => {
+  it('covers the band exactly when √((C_max + C_s)/(C_min + C_s)) allows it, and otherwise refuses at highFrequency', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e5, max: 1e8, noNaN: true }),
+        fc.double({ min: 1.0001, max: 6, noNaN: true }),
+        fc.double({ min: 2, max: 50, noNaN: true }),
+        fc.double({ min: 1.5, max: 60, noNaN: true }),
+        fc.oneof(fc.constant(0), fc.double({ min: 0.01, max: 40, noNaN: true })),
+        fc.oneof(fc.constant(0), fc.double({ min: 1e-4, max: 0.1, noNaN: true })),
+        (f1, ratio, cmin, spread, cs, margin) => {
+          const b = { lowFrequency: f1, highFrequency: f1 * ratio, minCapacitance: cmin * pF, maxCapacitance: cmin * spread * pF, strayCapacitance: cs * pF, margin };
+          const need = (ratio * (1 + margin)) / (1 - margin);
+          const widest = Math.sqrt((cmin * spread + cs) / (cmin + cs));
+          if (need > widest * (1 + 1e-9)) {
+            expect(fieldOf(() => designForBand(b))).toBe('highFrequency');
+            return;
+          }
+          if (need > widest * (1 - 1e-9)) return; // too close to the limit to say which side rounding falls
+          const d = designForBand(b);
+          const e = ends(d);
+          expect(rel(e.low, f1 * (1 - margin))).toBeLessThan(1e-9);
+          expect(rel(e.high, f1 * ratio * (1 + margin))).toBeLessThan(1e-9);
+          expect(d.trimmerCapacitance).toBeGreaterThanOrEqual(0);
+          if (d.padderCapacitance !== undefined) expect(d.padderCapacitance).toBeGreaterThan(0);
+        },
+      ),
+      { numRuns: 500, seed: 20250608 },
+    );
   });
 });
 
