@@ -18,6 +18,11 @@ export {
 export { E_SERIES, E_SERIES_NAMES, eSeries, nearestPreferredValue, preferredNeighbours, requireSeries, seriesValuesBetween } from './preferred';
 export type { ESeriesName, PreferredNeighbours } from './preferred';
 export { resonantPairs, toleranceSpread } from './pairs';
+export { bandCoverage, designForBand, slugTuning, dialLaw, bandSelectivity, PADDER_SWITCH_RATIO } from './band';
+export type {
+  BandCircuit, BandCoverage, BandDesignInput, BandDesign, SlugTuningInput, SlugSetting, SlugTuning, PlatePoint, DialLawInput, DialLaw,
+  BandSelectivityInput, SelectivityPoint, BandSelectivity,
+} from './band';
 export { trackingPoints, designTracking, trackingError } from './tracking';
 export type { TrackingCircuit, TrackingInput, TrackingCurve, TrackingExtreme, TrackingCurveInput, TrackingErrorResult, TrackingDesign } from './tracking';
 export type {

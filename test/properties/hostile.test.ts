@@ -44,6 +44,8 @@ const toroidCore = { outerDiameter: 12.7e-3, innerDiameter: 7.7e-3, height: 4.9e
 const solenoid = { diameter: 20e-3, turns: 20, pitch: 1e-3, wireDiameter: 0.5e-3 };
 const coilLoss = { frequency: 7e6, turns: 20, diameter: 20e-3, pitch: 1e-3, wireDiameter: 0.5e-3 };
 const multilayer = { diameter: 20e-3, length: 10e-3, windingDepth: 5e-3 };
+// the band planner: a 5.9–6.2 MHz band on a 10–365 pF capacitor (demo values, invented)
+const bandCircuit = { inductance: 7.5e-6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, trimmerCapacitance: 343e-12, padderCapacitance: 99e-12 };
 // tracking (demo values, invented: a 530–1600 kHz set, IF 455 kHz, 10–365 pF gang)
 const trackingDemo = { lowFrequency: 530e3, highFrequency: 1600e3, intermediateFrequency: 455e3, oscillatorSide: 'above', signal: { inductance: 230e-6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, trimmerCapacitance: 20e-12 }, points: 21 };
 const trackingOscillator = { inductance: 125.5e-6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, trimmerCapacitance: 28.6e-12, padderCapacitance: 384e-12 };
@@ -85,6 +87,32 @@ const TABLE: Record<string, Entry> = {
         lowFrequency: 5.9e6, highFrequency: 6.2e6, capacitorSeries: 'E24', inductorSeries: 'none', shopCoils: [{ name: 'demo coil', inductance: 4.2e-6, selfCapacitance: 2.5e-12 }],
         strayCapacitance: 10e-12, reactanceRange: { minimum: 10, maximum: 3000 }, capacitanceTolerance: 0.05, inductanceTolerance: 0.05, strayTolerance: 0.25, count: 3, samples: 20, seed: 7, distribution: 'normal',
       }],
+    ],
+  },
+  bandCoverage: { calls: [[bandCircuit], [{ ...bandCircuit, trimmerCapacitance: 355e-12, padderCapacitance: 99e-12 }]] },
+  designForBand: {
+    calls: [
+      [{ lowFrequency: 5.9e6, highFrequency: 6.2e6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, margin: 0.01 }],
+      [{ lowFrequency: 530e3, highFrequency: 1700e3, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, margin: 0, arrangement: 'trimmer' }],
+    ],
+  },
+  slugTuning: {
+    calls: [
+      [{ minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, trimmerCapacitance: 15e-12, minInductance: 200e-6, maxInductance: 260e-6, lowFrequency: 540e3, highFrequency: 1600e3 }],
+      [{ minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, padderCapacitance: 500e-12, inductance: 230e-6, adjustment: 0.15 }],
+    ],
+  },
+  dialLaw: {
+    calls: [
+      [{ ...bandCircuit, plates: 'slc', points: 19 }],
+      [{ ...bandCircuit, plates: 'slf', rotation: 270, points: 10 }],
+      [{ inductance: 7.5e-6, strayCapacitance: 12e-12, trimmerCapacitance: 343e-12, padderCapacitance: 99e-12, plates: [{ angle: 0, capacitance: 365e-12 }, { angle: 90, capacitance: 90e-12 }, { angle: 180, capacitance: 10e-12 }], points: 19 }],
+    ],
+  },
+  bandSelectivity: {
+    calls: [
+      [{ band: bandCircuit, coil: { form: 'solenoid', diameter: 20e-3, pitch: 1e-3, wire: { diameter: 0.5e-3 } }, capacitorQ: 1000, sourceResistance: 20e3, loadResistance: 50e3, points: 5 }],
+      [{ band: bandCircuit, coilQ: 150, dissipationFactor: 0.001, points: 3 }],
     ],
   },
   trackingPoints: { calls: [[530e3, 1600e3]] },
