@@ -23,6 +23,8 @@ export type {
   BandCircuit, BandCoverage, BandDesignInput, BandDesign, SlugTuningInput, SlugSetting, SlugTuning, PlatePoint, DialLawInput, DialLaw,
   BandSelectivityInput, SelectivityPoint, BandSelectivity,
 } from './band';
+export { imageFrequency, imageRejection } from './image';
+export type { OscillatorSide, ImageRejectionInput, ImageRejection } from './image';
 export { trackingPoints, designTracking, trackingError } from './tracking';
 export type { TrackingCircuit, TrackingInput, TrackingCurve, TrackingExtreme, TrackingCurveInput, TrackingErrorResult, TrackingDesign } from './tracking';
 export type {

@@ -115,6 +115,9 @@ const TABLE: Record<string, Entry> = {
       [{ band: bandCircuit, coilQ: 150, dissipationFactor: 0.001, points: 3 }],
     ],
   },
+  imageFrequency: { calls: [[6.05e6, 455e3, 'below'], [6.05e6, 455e3]] },
+  // a lossless tank with no terminations has infinite loaded Q, and so an infinite estimate, as documented
+  imageRejection: { calls: [[{ tank, signalFrequency: 7.1e6, intermediateFrequency: 455e3, oscillatorSide: 'below' }]], mayBeInfinite: ['loadedQ', 'estimate'] },
   trackingPoints: { calls: [[530e3, 1600e3]] },
   designTracking: { calls: [[trackingDemo], [{ ...trackingDemo, oscillatorStrayCapacitance: 0, trackingFrequencies: [600e3, 950e3, 1500e3] }]] },
   trackingError: { calls: [[{ ...trackingDemo, oscillator: trackingOscillator }]] },
