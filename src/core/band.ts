@@ -118,8 +118,12 @@ export interface BandCoverage {
   highEndCapacitance: number;
 }
 
-/** The capacitor network, checked. */
-interface Network {
+/**
+ * The capacitor network, checked (SI): variable capacitor's ends, strays,
+ * trimmer (0 for none) and padder (undefined for none). Shared with the
+ * tracking module, which checks its circuits with its own messages.
+ */
+export interface Network {
   min: number;
   max: number;
   stray: number;
@@ -150,25 +154,25 @@ function checkNetwork(c: Partial<BandCircuit>): Network {
   return { min, max, stray, trimmer, padder };
 }
 
-/** Capacitance across the coil with the variable capacitor at `cv`, F. */
-function totalCapacitance(n: Network, cv: number): number {
+/** Capacitance across the coil with the variable capacitor at `cv`, F: C_s + series(C_v + C_t, C_p). */
+export function totalCapacitance(n: Network, cv: number): number {
   const p = cv + n.trimmer;
   return n.stray + (n.padder === undefined ? p : (n.padder * p) / (n.padder + p));
 }
 
 /** The variable capacitor's setting that gives `total` across the coil, F (inverse of totalCapacitance). */
-function variableFor(n: Network, total: number): number {
+export function variableFor(n: Network, total: number): number {
   const s = total - n.stray;
   return (n.padder === undefined ? s : (s * n.padder) / (n.padder - s)) - n.trimmer;
 }
 
-/** Thomson's formula with √L·√C (the product can overflow). */
-function thomson(l: number, c: number): number {
+/** Thomson's formula with √L·√C (the product can overflow), Hz. */
+export function thomson(l: number, c: number): number {
   return 1 / (TWO_PI * Math.sqrt(l) * Math.sqrt(c));
 }
 
 /** The inductance or capacitance that resonates with `x` (a capacitance or an inductance) at f: 1/((2πf)² x). */
-function partnerAt(x: number, f: number): number {
+export function partnerAt(x: number, f: number): number {
   const w = TWO_PI * f;
   return 1 / w / (w * x);
 }

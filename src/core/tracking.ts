@@ -63,27 +63,19 @@
  * identical gang sections; the gang's capacitance law does not matter
  * (everything is a function of the capacitance, not of the angle).
  */
+import { partnerAt, thomson, totalCapacitance, variableFor, type BandCircuit, type Network } from './band';
 import { TWO_PI } from './constants';
 import { DesignError, requireNonNegative, requireObject, requirePositive } from './errors';
 import { note, type DesignNote } from './notes';
 import { MAX_SWEEP_POINTS } from './sweep';
 import { sayNumber, sayQuantity } from './text';
 
-/** One tuned circuit: coil, gang section, trimmer across it, padder in series, stray across the coil (SI). */
-export interface TrackingCircuit {
-  /** Coil inductance L, H (> 0). */
-  inductance: number;
-  /** Gang section at minimum (plates out), F (> 0). */
-  minCapacitance: number;
-  /** Gang section at maximum (plates in), F (> minCapacitance). */
-  maxCapacitance: number;
-  /** Stray capacitance across the coil, F (≥ 0). */
-  strayCapacitance: number;
-  /** Trimmer in parallel with the gang section, F (≥ 0; default 0). */
-  trimmerCapacitance?: number;
-  /** Padder in series with gang and trimmer, F (> 0; omitted = no padder). */
-  padderCapacitance?: number;
-}
+/**
+ * One tuned circuit: coil, gang section (the variable capacitor), trimmer
+ * across it, padder in series, stray across the coil (SI). The same circuit
+ * as the band module's `BandCircuit`.
+ */
+export type TrackingCircuit = BandCircuit;
 
 /** What three-point tracking starts from. */
 export interface TrackingInput {
@@ -158,37 +150,24 @@ const DEFAULT_POINTS = 101;
 const RESIDUAL_LIMIT = 1e-9;
 
 // ---------------------------------------------------------------------------
-// The tank's capacitance (same combination as the band module's coverage).
+// The tank: the band module's capacitor network with its coil.
 
-interface Circuit {
+/** A checked circuit: the band module's network (padder undefined for none) and the coil L, H. */
+interface Circuit extends Network {
   L: number;
-  cMin: number;
-  cMax: number;
-  stray: number;
-  trim: number;
-  /** Padder, F; Infinity for none. */
-  pad: number;
-}
-
-/** Total capacitance across the coil for gang setting c: C_s + series(c + C_t, C_p). */
-function tankCapacitance(k: Circuit, c: number): number {
-  const x = c + k.trim;
-  return k.stray + (k.pad === Infinity ? x : (k.pad * x) / (x + k.pad));
 }
 
 /** Resonant frequency of the circuit at gang setting c, Hz (Thomson). */
 function circuitFrequency(k: Circuit, c: number): number {
-  return 1 / (TWO_PI * Math.sqrt(k.L) * Math.sqrt(tankCapacitance(k, c)));
+  return thomson(k.L, totalCapacitance(k, c));
 }
 
 /** Gang setting that tunes the circuit to f (NaN when no positive setting does). */
 function gangSetting(k: Circuit, f: number): number {
-  const w = TWO_PI * f;
-  const y = 1 / w / (w * k.L) - k.stray; // series(c + C_t, C_p)
-  if (!(y > 0)) return Number.NaN;
-  const inv = 1 / y - (k.pad === Infinity ? 0 : 1 / k.pad); // 1/(c + C_t)
-  if (!(inv > 0)) return Number.NaN;
-  return 1 / inv - k.trim;
+  const total = partnerAt(k.L, f);
+  const y = total - k.stray; // series(c + C_t, C_p)
+  if (!(y > 0) || (k.padder !== undefined && !(y < k.padder))) return Number.NaN;
+  return variableFor(k, total);
 }
 
 // ---------------------------------------------------------------------------
@@ -204,8 +183,8 @@ function checkCircuit(prefix: string, value: unknown, what: string): Circuit {
   }
   const stray = requireNonNegative(`${prefix}.strayCapacitance`, k.strayCapacitance, `The stray capacitance across the ${what}'s coil`, 'F');
   const trim = k.trimmerCapacitance === undefined ? 0 : requireNonNegative(`${prefix}.trimmerCapacitance`, k.trimmerCapacitance, `The ${what}'s trimmer`, 'F');
-  const pad = k.padderCapacitance === undefined ? Infinity : requirePositive(`${prefix}.padderCapacitance`, k.padderCapacitance, `The ${what}'s padder`, 'F');
-  return { L, cMin, cMax, stray, trim, pad };
+  const padder = k.padderCapacitance === undefined ? undefined : requirePositive(`${prefix}.padderCapacitance`, k.padderCapacitance, `The ${what}'s padder`, 'F');
+  return { L, min: cMin, max: cMax, stray, trimmer: trim, padder };
 }
 
 interface Checked {
@@ -241,8 +220,8 @@ function checkInput(value: unknown): Checked {
     throw new DesignError('points', `The number of points of the error curve must be a whole number from 3 to 1,000,000 (got ${String(n)}).`);
   }
   // the signal circuit must tune the whole band
-  const sigLow = circuitFrequency(signal, signal.cMax);
-  const sigHigh = circuitFrequency(signal, signal.cMin);
+  const sigLow = circuitFrequency(signal, signal.max);
+  const sigHigh = circuitFrequency(signal, signal.min);
   if (!Number.isFinite(sigLow) || !Number.isFinite(sigHigh) || !(sigLow > 0)) {
     throw new DesignError('signal.inductance', 'The signal circuit\'s values are far outside anything that can be built: its tuning range cannot be computed.');
   }
@@ -259,7 +238,7 @@ function checkInput(value: unknown): Checked {
 
 /** Gang setting for signal frequency f, clamped onto the gang's range (f may sit a hair outside by rounding). */
 function settingFor(k: Circuit, f: number): number {
-  return Math.min(k.cMax, Math.max(k.cMin, gangSetting(k, f)));
+  return Math.min(k.max, Math.max(k.min, gangSetting(k, f)));
 }
 
 function checkTrackingFrequencies(value: unknown, c: Checked): [number, number, number] {
@@ -271,8 +250,8 @@ function checkTrackingFrequencies(value: unknown, c: Checked): [number, number, 
   if (!(f[0] < f[1] && f[1] < f[2])) {
     throw new DesignError('trackingFrequencies', `The tracking frequencies must be distinct and ascending (got ${f.map((x) => sayQuantity(x, 'Hz', 4)).join(', ')}).`);
   }
-  const sigLow = circuitFrequency(c.signal, c.signal.cMax);
-  const sigHigh = circuitFrequency(c.signal, c.signal.cMin);
+  const sigLow = circuitFrequency(c.signal, c.signal.max);
+  const sigHigh = circuitFrequency(c.signal, c.signal.min);
   for (const x of f) {
     if (x < sigLow || x > sigHigh) {
       throw new DesignError('trackingFrequencies', `Tracking frequency ${sayQuantity(x, 'Hz', 4)} is outside the signal circuit's range, ${sayQuantity(sigLow, 'Hz', 4)} to ${sayQuantity(sigHigh, 'Hz', 4)}.`);
@@ -381,7 +360,7 @@ export function trackingError(input: TrackingCurveInput): TrackingErrorResult {
   const c = checkInput(input);
   const osc = checkCircuit('oscillator', (input as TrackingCurveInput).oscillator, 'oscillator');
   const same = (a: number, b: number): boolean => Math.abs(a - b) <= 1e-9 * Math.max(a, b);
-  if (!same(osc.cMin, c.signal.cMin) || !same(osc.cMax, c.signal.cMax)) {
+  if (!same(osc.min, c.signal.min) || !same(osc.max, c.signal.max)) {
     throw new DesignError('oscillator.maxCapacitance', 'The oscillator\'s gang section must be the same as the signal circuit\'s (same minimum and maximum): both are sections of one gang.');
   }
   return curveOf(c, osc);
@@ -438,13 +417,13 @@ export function designTracking(input: TrackingInput): TrackingDesign {
   requireClean([padder, inductance, trimmer], 'intermediateFrequency');
   const oscillator: Required<TrackingCircuit> = {
     inductance,
-    minCapacitance: c.signal.cMin,
-    maxCapacitance: c.signal.cMax,
+    minCapacitance: c.signal.min,
+    maxCapacitance: c.signal.max,
     strayCapacitance: stray,
     trimmerCapacitance: trimmer,
     padderCapacitance: padder,
   };
-  const osc: Circuit = { L: inductance, cMin: c.signal.cMin, cMax: c.signal.cMax, stray, trim: trimmer, pad: padder };
+  const osc: Circuit = { L: inductance, min: c.signal.min, max: c.signal.max, stray, trimmer, padder };
   // the closed form must hit its three points; extreme inputs lose the digits it needs
   for (let i = 0; i < 3; i++) {
     const fo = circuitFrequency(osc, C[i]);
@@ -453,8 +432,8 @@ export function designTracking(input: TrackingInput): TrackingDesign {
     }
   }
   const result = curveOf(c, osc);
-  const oscillatorLowFrequency = circuitFrequency(osc, osc.cMax);
-  const oscillatorHighFrequency = circuitFrequency(osc, osc.cMin);
+  const oscillatorLowFrequency = circuitFrequency(osc, osc.max);
+  const oscillatorHighFrequency = circuitFrequency(osc, osc.min);
   requireClean([oscillatorLowFrequency, oscillatorHighFrequency], 'intermediateFrequency');
   const notes = [
     note('info', `Tracks exactly at ${f.map((x) => sayQuantity(x, 'Hz', 4)).join(', ')}${given.trackingFrequencies === undefined ? ' (band centre and ±0.866 of the half-band: the Chebyshev placement)' : ''}; largest error ${sayQuantity(result.largestError.error, 'Hz', 3)} at ${sayQuantity(result.largestError.signalFrequency, 'Hz', 4)}.`),

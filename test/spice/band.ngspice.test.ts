@@ -10,16 +10,12 @@
  * The netlist is written here rather than by tankNetlist, because the tank
  * exporter has a single capacitor and this circuit has three.
  */
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { bandCoverage, designForBand, type BandCircuit, type BandDesignInput } from '../../src/core/band';
+import { impedanceColumns, parabolicExtreme, runNgspice, spiceFolder } from '../helpers/spice';
 import { ngspiceAvailable, requireTool } from '../helpers/tools';
 
-const dir = mkdtempSync(join(tmpdir(), 'tankwright-band-spice-'));
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const dir = spiceFolder('tankwright-band-spice-');
 
 /** Coil Q used for the simulated coil: enough loss for a finite peak, too little to move it measurably. */
 const COIL_Q = 1000;
@@ -63,23 +59,8 @@ function netlist(c: BandCircuit, cv: number, f: number, name: string): string {
 
 /** Frequency of the |Z| peak from ngspice, by a parabola through the best sample and its neighbours. */
 function simulatedPeak(c: BandCircuit, cv: number, f: number, name: string): number {
-  writeFileSync(join(dir, `${name}.cir`), netlist(c, cv, f, name));
-  execFileSync('ngspice', ['-b', `${name}.cir`], { cwd: dir, stdio: 'pipe', timeout: 60_000 });
-  const rows = readFileSync(join(dir, `${name}.data`), 'utf8').trim().split('\n').slice(1);
-  const fs: number[] = [];
-  const z: number[] = [];
-  for (const row of rows) {
-    const [fr, re, im] = row.trim().split(/\s+/).map(Number);
-    fs.push(fr);
-    z.push(Math.hypot(re, im));
-  }
-  let i = 0;
-  for (let j = 1; j < z.length; j++) if (z[j] > z[i]) i = j;
-  expect(i).toBeGreaterThan(0);
-  expect(i).toBeLessThan(z.length - 1);
-  const [y0, y1, y2] = [z[i - 1], z[i], z[i + 1]];
-  const p = (0.5 * (y0 - y2)) / (y0 - 2 * y1 + y2);
-  return fs[i] + p * (fs[i + 1] - fs[i]);
+  const { f: fs, z } = impedanceColumns(runNgspice(dir, name, netlist(c, cv, f, name)));
+  return parabolicExtreme(fs, z).x;
 }
 
 // Demo bands (invented, the fictional Larkspur Lane workshop): band-spread with a padder, a broadcast band

@@ -6,16 +6,12 @@
  * Reference: ngspice AC analysis of the same lumped circuit (independent
  * solver; the core's own formulas are not used to judge the data).
  */
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { analyzeTank, tankNetlist, type TankInput } from '../../src/core';
+import { impedanceColumns, parabolicExtreme, runNgspice, spiceFolder } from '../helpers/spice';
 import { ngspiceAvailable, requireTool } from '../helpers/tools';
 
-const dir = mkdtempSync(join(tmpdir(), 'tankwright-spice-'));
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const dir = spiceFolder('tankwright-spice-');
 
 interface Measured {
   frequency: number;
@@ -36,29 +32,10 @@ function transducerGains(z: number[], tank: TankInput): number[] {
   return z.map((m) => (tank.mode === 'series' ? (4 * rs * rl) / (m * m) : (4 * m * m) / (rs * rl)));
 }
 
-/** Largest value of y by a parabola through the best sample and its neighbours. */
-function peakOf(y: number[]): number {
-  let i = 1;
-  for (let j = 1; j < y.length - 1; j++) if (y[j] > y[i]) i = j;
-  const [y0, y1, y2] = [y[i - 1], y[i], y[i + 1]];
-  const p = (0.5 * (y0 - y2)) / (y0 - 2 * y1 + y2);
-  return y1 - 0.25 * (y0 - y2) * p;
-}
-
 /** Run the netlist the core writes and return frequency and |Z| columns. */
 function simulate(name: string, tank: TankInput, start: number, stop: number): { f: number[]; z: number[] } {
   const netlist = tankNetlist(tank, { sweep: { start, stop, points: 4001, spacing: 'linear' }, dataFile: `${name}.data`, title: name });
-  writeFileSync(join(dir, `${name}.cir`), netlist);
-  execFileSync('ngspice', ['-b', `${name}.cir`], { cwd: dir, stdio: 'pipe', timeout: 60_000 });
-  const rows = readFileSync(join(dir, `${name}.data`), 'utf8').trim().split('\n').slice(1);
-  const f: number[] = [];
-  const z: number[] = [];
-  for (const row of rows) {
-    const [fr, re, im] = row.trim().split(/\s+/).map(Number);
-    f.push(fr);
-    z.push(Math.hypot(re, im));
-  }
-  return { f, z };
+  return impedanceColumns(runNgspice(dir, name, netlist));
 }
 
 /**
@@ -67,15 +44,7 @@ function simulate(name: string, tank: TankInput, start: number, stop: number): {
  * linear interpolation between samples.
  */
 function measure({ f, z }: { f: number[]; z: number[] }, sign: 1 | -1): Measured {
-  let i = 0;
-  for (let j = 1; j < z.length; j++) if (sign * z[j] > sign * z[i]) i = j;
-  expect(i).toBeGreaterThan(0);
-  expect(i).toBeLessThan(z.length - 1);
-  const [y0, y1, y2] = [z[i - 1], z[i], z[i + 1]];
-  const h = f[i + 1] - f[i];
-  const p = (0.5 * (y0 - y2)) / (y0 - 2 * y1 + y2);
-  const frequency = f[i] + p * h;
-  const impedance = y1 - 0.25 * (y0 - y2) * p;
+  const { index: i, x: frequency, y: impedance } = parabolicExtreme(f, z, sign);
   const level = sign > 0 ? impedance / Math.SQRT2 : impedance * Math.SQRT2;
   const crosses = (a: number, b: number) => (a - level) * (b - level) <= 0;
   let lo = i;
@@ -147,7 +116,8 @@ describe.runIf(requireTool('ngspice', ngspiceAvailable(), 'apt-get install -y ng
       const f = a.loadedResonantFrequency;
       const span = Math.min(4 * a.bandwidth, 0.9 * f);
       const { z } = simulate(`${name}-gt`, tank, f - span, f + span);
-      const simulated = -10 * Math.log10(peakOf(transducerGains(z, tank)));
+      const gains = transducerGains(z, tank);
+      const simulated = -10 * Math.log10(parabolicExtreme(gains.map((_, k) => k), gains).y);
       // ngspice AC analysis (independent solver): within 0.0001 dB (agreement seen: 1e-11 dB)
       expect(Math.abs((a.transducerLoss as number) - simulated)).toBeLessThan(1e-4);
     });
@@ -155,11 +125,9 @@ describe.runIf(requireTool('ngspice', ngspiceAvailable(), 'apt-get install -y ng
 
   it('the netlist runs in ngspice with the default sweep and writes one row per point', () => {
     const tank: TankInput = { inductance: 10e-6, capacitance: 100e-12, coilQ: 150 };
-    writeFileSync(join(dir, 'default.cir'), tankNetlist(tank, { dataFile: 'default.data' }));
-    execFileSync('ngspice', ['-b', 'default.cir'], { cwd: dir, stdio: 'pipe', timeout: 60_000 });
-    const rows = readFileSync(join(dir, 'default.data'), 'utf8').trim().split('\n');
-    expect(rows.length).toBe(2002); // header + 2001 points
-    const m = measure({ f: rows.slice(1).map((r) => Number(r.trim().split(/\s+/)[0])), z: rows.slice(1).map((r) => { const [, re, im] = r.trim().split(/\s+/).map(Number); return Math.hypot(re, im); }) }, 1);
+    const rows = runNgspice(dir, 'default', tankNetlist(tank, { dataFile: 'default.data' }));
+    expect(rows.length).toBe(2001); // one row per point (the header line dropped)
+    const m = measure(impedanceColumns(rows), 1);
     const a = analyzeTank(tank);
     expect(Math.abs(m.frequency / a.resonantFrequency - 1)).toBeLessThan(1e-3);
     expect(Math.abs(m.impedance / a.dynamicResistance - 1)).toBeLessThan(0.02);

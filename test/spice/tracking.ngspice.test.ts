@@ -12,16 +12,12 @@
  * core's formulas are not used to judge the data.
  * Reference: ngspice AC analysis (independent solver).
  */
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { designTracking, type TrackingCircuit, type TrackingInput } from '../../src/core/tracking';
+import { parabolicExtreme, runNgspice, spiceFolder } from '../helpers/spice';
 import { ngspiceAvailable, requireTool } from '../helpers/tools';
 
-const dir = mkdtempSync(join(tmpdir(), 'tankwright-tracking-'));
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const dir = spiceFolder('tankwright-tracking-');
 
 /**
  * Netlist of one tuned circuit with the gang at `gang` farads: L and the stray
@@ -58,17 +54,8 @@ function netlist(name: string, k: TrackingCircuit, gang: number, start: number, 
 
 /** Frequency of the |Z| peak from an ngspice AC sweep around `guess` (±1 %), by a parabola through the best samples. */
 function simulatedResonance(name: string, k: TrackingCircuit, gang: number, guess: number): number {
-  writeFileSync(join(dir, `${name}.cir`), netlist(name, k, gang, guess * 0.99, guess * 1.01));
-  execFileSync('ngspice', ['-b', `${name}.cir`], { cwd: dir, stdio: 'pipe', timeout: 60_000 });
-  const rows = readFileSync(join(dir, `${name}.data`), 'utf8').trim().split('\n').map((r) => r.trim().split(/\s+/).map(Number)).filter((r) => r.length >= 2 && Number.isFinite(r[0]));
-  const f = rows.map((r) => r[0]);
-  const z = rows.map((r) => r[1]);
-  let i = 0;
-  for (let j = 1; j < z.length; j++) if (z[j] > z[i]) i = j;
-  expect(i).toBeGreaterThan(0);
-  expect(i).toBeLessThan(z.length - 1);
-  const p = (0.5 * (z[i - 1] - z[i + 1])) / (z[i - 1] - 2 * z[i] + z[i + 1]);
-  return f[i] + p * (f[i + 1] - f[i]);
+  const rows = runNgspice(dir, name, netlist(name, k, gang, guess * 0.99, guess * 1.01));
+  return parabolicExtreme(rows.map((r) => r[0]), rows.map((r) => r[1])).x;
 }
 
 // Demo sets (invented values, the fictional Harbour Lane workshop), as in test/core/tracking.test.ts.
