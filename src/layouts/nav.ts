@@ -9,6 +9,7 @@ export const NAV: readonly NavItem[] = [
   { href: '/resonance/', label: 'Resonance' },
   { href: '/coil/', label: 'Coil' },
   { href: '/tank/', label: 'Tank' },
+  { href: '/band/', label: 'Band' },
   { href: '/methods/', label: 'Methods' },
   { href: '/cautions/', label: 'Cautions' },
 ];

@@ -1,0 +1,184 @@
+/**
+ * The band plan: from the Band bench's values (its table's spec, SI, by
+ * path) to the results at the top of the bench, by calling the core in turn:
+ *
+ *   designForBand (coil L, trimmer, padder, band covered)
+ *   → bandSelectivity (the coil wound once by designCoil for that L at
+ *     mid-band, its Q across the band, the tank's unloaded and loaded Q,
+ *     bandwidth and dynamic resistance at each frequency)
+ *   → the image response of the signal tank (tankImpedance) for a superhet
+ *   → dialLaw (frequency against rotation, straight-line capacitance and
+ *     straight-line frequency plates)
+ *
+ * The parts the bench shows further down live in modules of their own, which
+ * the bench loads when their section comes near the screen (so the page's
+ * first JavaScript stays small): bandTracking.ts (three-point tracking and
+ * the oscillator coil), bandPairs.ts (fixed pairs with their tolerance
+ * spread) and bandLinks.ts (the hand-offs to the Coil and Tank benches).
+ * Pure: no Solid, no DOM; tests and the shop sheet call them in Node.
+ *
+ * Every DesignError keeps a spec path the table routes to a field: the
+ * core's own names, `coil.…` for the coil (bandSelectivity's prefix, and
+ * the spec builder's errors are given it here too).
+ */
+import { dialLaw, designForBand, bandSelectivity, type BandDesign, type BandSelectivity, type DialLaw } from '../../src/core/band';
+import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
+import { DesignError, isDesignError } from '../../src/core/errors';
+import type { DesignNote } from '../../src/core/notes';
+import { tankImpedance } from '../../src/core/tankKernel';
+import { formatQuantityCompact, parseQuantityRange } from '../../src/quantity';
+import { getPath, type Choices, type SpecObject } from '../kit/fields';
+import { capacitorKindRange, COIL_PREFIX } from './bandFields';
+import { buildCoilSpec } from './coilFields';
+
+/** Points of the dial law curves. */
+export const DIAL_POINTS = 101;
+/** Points of the selectivity and image curves across the band. */
+export const SELECTIVITY_POINTS = 41;
+/** A number at a path of the raw values, or undefined. */
+export function num(raw: unknown, path: string): number | undefined {
+  const v = getPath(raw, path);
+  return typeof v === 'number' ? v : undefined;
+}
+
+/** Runs `fn`, giving a DesignError's field the prefix (the coil's spec builder names paths without `coil.`). */
+function under<T>(prefix: string, fn: () => T): T {
+  try {
+    return fn();
+  } catch (e) {
+    if (isDesignError(e)) throw new DesignError(`${prefix}.${e.field}`, e.message);
+    throw e;
+  }
+}
+
+/** The variable capacitor's ends, F: typed, or the kind chosen. */
+export function capacitorRange(raw: SpecObject, choices: Choices): { min: number | undefined; max: number | undefined } {
+  const kind = choices.capType === undefined || choices.capType === 'own' ? undefined : capacitorKindRange(choices.capType);
+  if (kind !== undefined) {
+    const r = parseQuantityRange(kind, 'F');
+    return { min: r.low, max: r.high };
+  }
+  return { min: num(raw, 'minCapacitance'), max: num(raw, 'maxCapacitance') };
+}
+
+/** The coil's spec without L, turns or frequency (the band sets them), from the `coil.…` values. */
+export function bandCoilSpec(raw: SpecObject, choices: Choices): DesignCoilSpec {
+  const coilRaw = (getPath(raw, COIL_PREFIX) ?? {}) as SpecObject;
+  return under(COIL_PREFIX, () => buildCoilSpec(coilRaw, { ...choices, give: 'L' }));
+}
+
+/** The image response of the tank tuned to f: how far below its response at f, dB (20 log |Z(f)|/|Z(f_image)|, loaded). */
+function imageRejection(tank: BandSelectivity['middle']['tank'], f: number, image: number): number {
+  const at = tankImpedance(tank, f, { loaded: true });
+  const im = tankImpedance(tank, image, { loaded: true });
+  return 20 * Math.log10(Math.hypot(at.re, at.im) / Math.hypot(im.re, im.im));
+}
+
+export interface ImageResponse {
+  /** Image frequency and rejection (dB) at the band's low, middle and high frequency. */
+  low: { image: number; rejection: number };
+  middle: { image: number; rejection: number };
+  high: { image: number; rejection: number };
+  /** Rejection across the band, dB, at the selectivity curve's frequencies. */
+  curve: number[];
+}
+
+export interface BandPlan {
+  design: BandDesign;
+  /** The coil as designCoil winds it for the band's L at mid-band. */
+  coil: DesignCoilResult;
+  /** The spec it was wound from (with L and the mid-band frequency). */
+  coilSpec: DesignCoilSpec;
+  selectivity: BandSelectivity;
+  dial: { slc: DialLaw; slf: DialLaw };
+  /** Superhet only: the signal tank's response at the image. */
+  image?: ImageResponse;
+  /** Every note of the plan, without repeats. */
+  notes: DesignNote[];
+}
+
+/**
+ * The whole plan for the bench's values (SI by path, as `bench.spec()` or
+ * `snapshotToSpec(BAND_FIELDS, …)` gives) and its choices.
+ * @throws DesignError with a spec path the table routes
+ */
+export function planBand(raw: SpecObject, choices: Choices): BandPlan {
+  const design = bandDesign(raw, choices);
+  const base = bandCoilSpec(raw, choices);
+  const coilQ = num(raw, 'coilQ');
+  const selectivity = bandSelectivity({
+    band: design,
+    coil: base,
+    ...(coilQ === undefined ? {} : { coilQ }),
+    capacitorQ: num(raw, 'capacitorQ'),
+    sourceResistance: num(raw, 'sourceResistance'),
+    loadResistance: num(raw, 'loadResistance'),
+    points: SELECTIVITY_POINTS,
+  });
+  const coil = selectivity.coil as DesignCoilResult;
+  const coilSpec = { ...base, inductance: design.inductance, frequency: selectivity.middle.frequency } as DesignCoilSpec;
+  const circuit = {
+    inductance: design.inductance,
+    strayCapacitance: design.strayCapacitance,
+    trimmerCapacitance: design.trimmerCapacitance,
+    padderCapacitance: design.padderCapacitance,
+    minCapacitance: design.minCapacitance,
+    maxCapacitance: design.maxCapacitance,
+    points: DIAL_POINTS,
+  };
+  const dial = { slc: dialLaw({ ...circuit, plates: 'slc' }), slf: dialLaw({ ...circuit, plates: 'slf' }) };
+  const notes: DesignNote[] = [...design.notes, ...selectivity.notes, ...dial.slf.notes];
+  const side = superhetSide(choices);
+  const ifreq = num(raw, 'intermediateFrequency');
+  let image: ImageResponse | undefined;
+  if (side !== undefined && ifreq !== undefined) {
+    const sign = side === 'above' ? 1 : -1;
+    const imageOf = (f: number) => Math.abs(f + 2 * sign * ifreq);
+    const point = (p: BandSelectivity['low']) => ({ image: imageOf(p.frequency), rejection: imageRejection(p.tank, p.frequency, imageOf(p.frequency)) });
+    const template = selectivity.middle.tank;
+    const w = (f: number) => 2 * Math.PI * f;
+    const curve = selectivity.curve.frequency.map((f, i) => {
+      // The tank tuned to f, as bandSelectivity builds it: the network that resonates L at f, the coil's Q there.
+      const tank = { ...template, capacitance: 1 / (w(f) * w(f) * design.inductance) - design.strayCapacitance, coilQ: selectivity.curve.coilQ[i], frequency: f };
+      return imageRejection(tank, f, imageOf(f));
+    });
+    image = { low: point(selectivity.low), middle: point(selectivity.middle), high: point(selectivity.high), curve };
+  }
+  const seen = new Set<string>();
+  return {
+    design, coil, coilSpec, selectivity, dial, image,
+    notes: notes.filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
+  };
+}
+
+/** The oscillator's side for a superhet, or undefined for none. */
+export function superhetSide(choices: Choices): 'above' | 'below' | undefined {
+  return choices.osc === 'above' || choices.osc === 'below' ? choices.osc : undefined;
+}
+
+/** designForBand for the bench's values: the band, the capacitor typed or chosen, strays, margin (%), arrangement. */
+export function bandDesign(raw: SpecObject, choices: Choices): BandDesign {
+  const cap = capacitorRange(raw, choices);
+  const margin = num(raw, 'marginPercent');
+  return designForBand({
+    lowFrequency: num(raw, 'lowFrequency') as number,
+    highFrequency: num(raw, 'highFrequency') as number,
+    minCapacitance: cap.min as number,
+    maxCapacitance: cap.max as number,
+    strayCapacitance: num(raw, 'strayCapacitance') as number,
+    margin: margin === undefined ? undefined : margin / 100,
+    arrangement: choices.arr === 'trimmer' ? 'trimmer' : 'auto',
+  });
+}
+
+/** A frequency in 4 figures, compact: "6.05 MHz". */
+export const hz = (f: number) => formatQuantityCompact(f, 'Hz', 4);
+/** A Q as people say it: whole numbers from 10 up, two figures below. */
+export const sayQ = (q: number) => (q >= 10 ? String(Math.round(q)) : q.toPrecision(2));
+/** Turns as wound: "33.5", "46". */
+export const sayTurns = (n: number) => String(Number(n.toFixed(1)));
+
+/** "5.9–6.2 MHz" style text for a band, 4 figures. */
+export function bandText(low: number, high: number): string {
+  return `${formatQuantityCompact(low, 'Hz', 4)} to ${formatQuantityCompact(high, 'Hz', 4)}`;
+}
