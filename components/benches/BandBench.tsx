@@ -14,7 +14,7 @@
  * section comes near the screen, as the kit's Plot loads uPlot: the page's
  * first JavaScript then holds only what the answer needs.
  */
-import { createEffect, createMemo, createSignal, lazy, Show, type JSX } from 'solid-js';
+import { createEffect, createMemo, createSignal, For, lazy, Show, type JSX } from 'solid-js';
 import { formatNumber, formatQuantityCompact } from '../../src/quantity';
 import { createBenchState, type BenchState } from '../kit/bench';
 import { createUrlState } from '../kit/createUrlState';
@@ -24,7 +24,7 @@ import { formatShift } from '../kit/format';
 import { createAwake, inParts, Later, type BenchParts } from '../kit/Later';
 import { LinkNotices } from '../kit/LinkNotices';
 import { AnswerDock, Summary, type DockedAnswer, type SummaryItem } from '../kit/Summary';
-import { BAND_FIELDS } from './bandFields';
+import { BAND_FIELDS, COIL_KEYS } from './bandFields';
 import { bandText, hz, planBand, sayQ, sayTurns, type BandPlan } from './bandPlan';
 
 /**
@@ -79,6 +79,11 @@ function summaryItems(p: BandPlan): SummaryItem[] {
   ];
 }
 
+/** Fields of the table, in order. */
+function Fields(props: { bench: BenchState; names: readonly string[] }) {
+  return <For each={props.names}>{(name) => <Field bench={props.bench} name={name} />}</For>;
+}
+
 /** The island, hydrated in parts (kit/Later): no single task blocks a phone for long. */
 export default inParts('band', BandBenchParts);
 
@@ -95,64 +100,30 @@ function BandBenchParts(outer: BenchParts<BandFormulas>) {
         <Later>
           <fieldset class="band-group">
             <legend>Band and capacitor</legend>
-            <Field bench={bench} name="band" />
-            <Field bench={bench} name="capType" />
-            <Field bench={bench} name="C" />
-            <Field bench={bench} name="Cs" />
-            <Field bench={bench} name="margin" />
-            <Field bench={bench} name="arr" />
+            <Fields bench={bench} names={['band', 'capType', 'C', 'Cs', 'margin', 'arr']} />
           </fieldset>
           <fieldset class="band-group">
             <legend>Superhet (optional)</legend>
-            <Field bench={bench} name="osc" />
-            <Field bench={bench} name="IF" />
+            <Fields bench={bench} names={['osc', 'IF']} />
           </fieldset>
         </Later>
         <fieldset class="band-group">
           <legend>Coil former and wire</legend>
           <Later>
-            <Field bench={bench} name="form" />
-            <Field bench={bench} name="dia" />
-            <Field bench={bench} name="D" />
-            <Field bench={bench} name="wind" />
-            <Field bench={bench} name="p" />
-            <Field bench={bench} name="OD" />
-            <Field bench={bench} name="ID" />
-            <Field bench={bench} name="h" />
-            <Field bench={bench} name="core" />
-            <Field bench={bench} name="AL" />
-            <Field bench={bench} name="mu" />
-            <Field bench={bench} name="mu2" />
+            <Fields bench={bench} names={COIL_KEYS.slice(0, 12)} />
           </Later>
           <Later>
-            <Field bench={bench} name="mD" />
-            <Field bench={bench} name="mlen" />
-            <Field bench={bench} name="depth" />
-            <Field bench={bench} name="wire" />
-            <Field bench={bench} name="awg" />
-            <Field bench={bench} name="swg" />
-            <Field bench={bench} name="wd" />
-            <Field bench={bench} name="enamel" />
-            <Field bench={bench} name="wod" />
-            <Field bench={bench} name="lead" />
-            <Field bench={bench} name="T" />
-            <Field bench={bench} name="Qcoil" />
+            <Fields bench={bench} names={[...COIL_KEYS.slice(12), 'Qcoil']} />
           </Later>
         </fieldset>
         <Later>
           <fieldset class="band-group">
             <legend>Losses and terminations</legend>
-            <Field bench={bench} name="capQ" />
-            <Field bench={bench} name="Rs" />
-            <Field bench={bench} name="Rload" />
+            <Fields bench={bench} names={['capQ', 'Rs', 'Rload']} />
           </fieldset>
           <fieldset class="band-group">
             <legend>Fixed pairs</legend>
-            <Field bench={bench} name="capSeries" />
-            <Field bench={bench} name="indSeries" />
-            <Field bench={bench} name="tolC" />
-            <Field bench={bench} name="tolL" />
-            <Field bench={bench} name="seed" />
+            <Fields bench={bench} names={['capSeries', 'indSeries', 'tolC', 'tolL', 'seed']} />
           </fieldset>
         </Later>
         <Show when={bench.generalError()}>

@@ -175,10 +175,10 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
             series={[
               { label: 'Loaded Q', values: sel()!.curve.loadedQ, format: sayQ },
               { label: 'Unloaded Q', values: sel()!.curve.unloadedQ, dash: true, format: sayQ },
-              { label: 'Bandwidth', values: sel()!.curve.bandwidth, unit: 'Hz', axis: 'right' },
+              { label: 'Bandwidth', values: sel()!.curve.bandwidth.map((b) => b / 1e3), unit: 'kHz', axis: 'right' },
             ]}
             yLabel="Q"
-            y2Label="Bandwidth (Hz)"
+            y2Label="Bandwidth (kHz)"
             stale={stale()}
           />
           <Show when={p()!.image}>

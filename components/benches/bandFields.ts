@@ -71,15 +71,16 @@ export const BAND_FIELDS: FieldTable = defineFields([
     answers: ['coil.inductance', 'coil.turns', 'coil.frequency', 'band.inductance', 'signal.inductance', 'inductance', 'frequency'],
   },
   {
-    kind: 'choice', key: 'capType', label: 'Variable capacitor', display: 'select', default: 'own',
-    options: [['own', 'Your own (give its range)'], ...CAPACITOR_KINDS.map(([v, label]) => [v, label] as const)],
-    answers: ['minCapacitance', 'maxCapacitance', 'band.minCapacitance', 'band.maxCapacitance'],
-    hint: 'typical figures for the kind: measure yours if you can',
-  },
-  {
     kind: 'range', key: 'C', unit: 'F', low: 'minCapacitance', high: 'maxCapacitance', label: 'Capacitor range, plates open..meshed',
     what: 'Capacitor range', default: '10p..365p', allowed: POSITIVE, when: { capType: 'own' },
     hint: 'min..max, e.g. 10p..365p or 10–365 pF', answers: ['band.minCapacitance', 'band.maxCapacitance'],
+  },
+  {
+    kind: 'choice', key: 'capType', label: 'Variable capacitor', display: 'select', default: 'own',
+    options: [['own', 'Your own (give its range)'], ...CAPACITOR_KINDS.map(([v, label]) => [v, label] as const)],
+    // Declared after the range it replaces: while that is in use it shows these errors itself.
+    answers: ['minCapacitance', 'maxCapacitance', 'band.minCapacitance', 'band.maxCapacitance'],
+    hint: 'typical figures for the kind: measure yours if you can',
   },
   {
     kind: 'quantity', key: 'Cs', path: 'strayCapacitance', label: 'Strays across the coil', symbol: 'Cₛ', unit: 'F', default: '15 pF',

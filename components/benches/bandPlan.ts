@@ -51,6 +51,16 @@ function under<T>(prefix: string, fn: () => T): T {
   }
 }
 
+/** As the Coil bench says it (coilDesign.ts): with bare wire the overall diameter is the bare one, shown at the gauge or diameter. */
+function inCoilTerms<T>(choices: Choices, fn: () => T): T {
+  try {
+    return fn();
+  } catch (e) {
+    if (isDesignError(e) && e.field === `${COIL_PREFIX}.wire.insulatedDiameter` && choices.enamel === 'bare') throw new DesignError(`${COIL_PREFIX}.wire.diameter`, e.message);
+    throw e;
+  }
+}
+
 /** The variable capacitor's ends, F: typed, or the kind chosen. */
 export function capacitorRange(raw: SpecObject, choices: Choices): { min: number | undefined; max: number | undefined } {
   const kind = choices.capType === undefined || choices.capType === 'own' ? undefined : capacitorKindRange(choices.capType);
@@ -106,7 +116,7 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
   const design = bandDesign(raw, choices);
   const base = bandCoilSpec(raw, choices);
   const coilQ = num(raw, 'coilQ');
-  const selectivity = bandSelectivity({
+  const selectivity = inCoilTerms(choices, () => bandSelectivity({
     band: design,
     coil: base,
     ...(coilQ === undefined ? {} : { coilQ }),
@@ -114,7 +124,7 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
     sourceResistance: num(raw, 'sourceResistance'),
     loadResistance: num(raw, 'loadResistance'),
     points: SELECTIVITY_POINTS,
-  });
+  }));
   const coil = selectivity.coil as DesignCoilResult;
   const coilSpec = { ...base, inductance: design.inductance, frequency: selectivity.middle.frequency } as DesignCoilSpec;
   const circuit = {
