@@ -93,7 +93,7 @@ export const BAND_FIELDS: FieldTable = defineFields([
   },
   {
     kind: 'choice', key: 'arr', path: 'arrangement', label: 'Added capacitance', default: 'auto',
-    options: [['auto', 'Trimmer; padder when needed'], ['trimmer', 'Trimmer only']],
+    options: [['auto', 'Padder if needed'], ['trimmer', 'Trimmer only']],
     answers: ['trimmerCapacitance', 'padderCapacitance', 'band.trimmerCapacitance', 'band.padderCapacitance'],
   },
 
