@@ -153,12 +153,12 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
           <Plot
             id="plot-dial"
             caption="Tuning curve: frequency against dial rotation, 0 % with the plates meshed. Solid: straight-line-capacitance plates; dashed: straight-line-frequency plates cut for this circuit. The padder crowds the meshed end of a straight-line-capacitance dial."
-            x={p()!.dial.slc.percent}
+            x={p()!.curves().dial.slc.percent}
             xLabel="Rotation"
             formatX={tickPercent}
             series={[
-              { label: 'SLC', values: p()!.dial.slc.frequency, unit: 'Hz' },
-              { label: 'SLF', values: p()!.dial.slf.frequency, unit: 'Hz', dash: true },
+              { label: 'SLC', values: p()!.curves().dial.slc.frequency, unit: 'Hz' },
+              { label: 'SLF', values: p()!.curves().dial.slf.frequency, unit: 'Hz', dash: true },
             ]}
             yLabel="Frequency"
             formatY={tickHz}
@@ -169,13 +169,13 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
           <Plot
             id="plot-selectivity"
             caption="Selectivity across the band: loaded Q (solid) and unloaded Q (dashed) on the left, the −3 dB bandwidth on the right."
-            x={sel()!.curve.frequency}
+            x={p()!.curves().selectivity.frequency}
             xLabel="Frequency"
             formatX={tickHz}
             series={[
-              { label: 'Loaded Q', values: sel()!.curve.loadedQ, format: sayQ },
-              { label: 'Unloaded Q', values: sel()!.curve.unloadedQ, dash: true, format: sayQ },
-              { label: 'Bandwidth', values: sel()!.curve.bandwidth.map((b) => b / 1e3), unit: 'kHz', axis: 'right' },
+              { label: 'Loaded Q', values: p()!.curves().selectivity.loadedQ, format: sayQ },
+              { label: 'Unloaded Q', values: p()!.curves().selectivity.unloadedQ, dash: true, format: sayQ },
+              { label: 'Bandwidth', values: p()!.curves().selectivity.bandwidth.map((b) => b / 1e3), unit: 'kHz', axis: 'right' },
             ]}
             yLabel="Q"
             y2Label="Bandwidth (kHz)"
@@ -185,10 +185,10 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
             <Plot
               id="plot-image"
               caption="Image rejection of the signal tank across the band, dB below its response on tune."
-              x={sel()!.curve.frequency}
+              x={p()!.curves().selectivity.frequency}
               xLabel="Frequency"
               formatX={tickHz}
-              series={[{ label: 'Image rejection', values: p()!.image!.curve, unit: 'dB', format: sayDb }]}
+              series={[{ label: 'Image rejection', values: p()!.curves().image ?? [], unit: 'dB', format: sayDb }]}
               yLabel="Rejection (dB)"
               stale={stale()}
             />

@@ -8,7 +8,10 @@
  *     bandwidth and dynamic resistance at each frequency)
  *   → the image response of the signal tank (tankImpedance) for a superhet
  *   → dialLaw (frequency against rotation, straight-line capacitance and
- *     straight-line frequency plates)
+ *     straight-line frequency plates), with the selectivity and image curves
+ *     worked out only when a plot first asks (`curves`): each point of the
+ *     selectivity is a tank analysis, and a phone should not pay for a plot
+ *     nobody scrolls to
  *
  * The parts the bench shows further down live in modules of their own, which
  * the bench loads when their section comes near the screen (so the page's
@@ -32,9 +35,9 @@ import { capacitorKindRange, COIL_PREFIX } from './bandFields';
 import { buildCoilSpec } from './coilFields';
 
 /** Points of the dial law curves. */
-export const DIAL_POINTS = 101;
+export const DIAL_POINTS = 61;
 /** Points of the selectivity and image curves across the band. */
-export const SELECTIVITY_POINTS = 41;
+export const SELECTIVITY_POINTS = 21;
 /** A number at a path of the raw values, or undefined. */
 export function num(raw: unknown, path: string): number | undefined {
   const v = getPath(raw, path);
@@ -89,8 +92,16 @@ export interface ImageResponse {
   low: { image: number; rejection: number };
   middle: { image: number; rejection: number };
   high: { image: number; rejection: number };
-  /** Rejection across the band, dB, at the selectivity curve's frequencies. */
-  curve: number[];
+}
+
+/** The curves the plots draw: worked out when a plot first asks (each point of the selectivity is a tank analysis). */
+export interface BandCurves {
+  /** Frequency against rotation for straight-line-capacitance and straight-line-frequency plates. */
+  dial: { slc: DialLaw; slf: DialLaw };
+  /** Selectivity at SELECTIVITY_POINTS frequencies across the band. */
+  selectivity: BandSelectivity['curve'];
+  /** Image rejection, dB, at the same frequencies (superhet only). */
+  image?: number[];
 }
 
 export interface BandPlan {
@@ -99,10 +110,12 @@ export interface BandPlan {
   coil: DesignCoilResult;
   /** The spec it was wound from (with L and the mid-band frequency). */
   coilSpec: DesignCoilSpec;
+  /** Selectivity at the band's low, middle and high frequency (its curve: see `curves`). */
   selectivity: BandSelectivity;
-  dial: { slc: DialLaw; slf: DialLaw };
   /** Superhet only: the signal tank's response at the image. */
   image?: ImageResponse;
+  /** The plotted curves, worked out on first call and kept. */
+  curves: () => BandCurves;
   /** Every note of the plan, without repeats. */
   notes: DesignNote[];
 }
@@ -116,17 +129,35 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
   const design = bandDesign(raw, choices);
   const base = bandCoilSpec(raw, choices);
   const coilQ = num(raw, 'coilQ');
-  const selectivity = inCoilTerms(choices, () => bandSelectivity({
+  const selectivityAt = (points: number) => inCoilTerms(choices, () => bandSelectivity({
     band: design,
     coil: base,
     ...(coilQ === undefined ? {} : { coilQ }),
     capacitorQ: num(raw, 'capacitorQ'),
     sourceResistance: num(raw, 'sourceResistance'),
     loadResistance: num(raw, 'loadResistance'),
-    points: SELECTIVITY_POINTS,
+    points,
   }));
+  // Low, middle and high now; the curve (a tank analysis per point) when a plot asks.
+  const selectivity = selectivityAt(2);
   const coil = selectivity.coil as DesignCoilResult;
   const coilSpec = { ...base, inductance: design.inductance, frequency: selectivity.middle.frequency } as DesignCoilSpec;
+  const side = superhetSide(choices);
+  const ifreq = num(raw, 'intermediateFrequency');
+  const imageOf = side === undefined || ifreq === undefined ? undefined : (f: number) => Math.abs(f + 2 * (side === 'above' ? 1 : -1) * ifreq);
+  const point = (p: BandSelectivity['low'], im: (f: number) => number) => ({ image: im(p.frequency), rejection: imageRejection(p.tank, p.frequency, im(p.frequency)) });
+  const image = imageOf && { low: point(selectivity.low, imageOf), middle: point(selectivity.middle, imageOf), high: point(selectivity.high, imageOf) };
+  let curves: BandCurves | undefined;
+  const seen = new Set<string>();
+  return {
+    design, coil, coilSpec, selectivity, image,
+    curves: () => (curves ??= bandCurves(design, selectivityAt(SELECTIVITY_POINTS), imageOf)),
+    notes: [...design.notes, ...selectivity.notes].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
+  };
+}
+
+/** The dial laws, the selectivity curve and the image rejection along it. */
+function bandCurves(design: BandDesign, selectivity: BandSelectivity, imageOf: ((f: number) => number) | undefined): BandCurves {
   const circuit = {
     inductance: design.inductance,
     strayCapacitance: design.strayCapacitance,
@@ -136,29 +167,14 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
     maxCapacitance: design.maxCapacitance,
     points: DIAL_POINTS,
   };
-  const dial = { slc: dialLaw({ ...circuit, plates: 'slc' }), slf: dialLaw({ ...circuit, plates: 'slf' }) };
-  const notes: DesignNote[] = [...design.notes, ...selectivity.notes, ...dial.slf.notes];
-  const side = superhetSide(choices);
-  const ifreq = num(raw, 'intermediateFrequency');
-  let image: ImageResponse | undefined;
-  if (side !== undefined && ifreq !== undefined) {
-    const sign = side === 'above' ? 1 : -1;
-    const imageOf = (f: number) => Math.abs(f + 2 * sign * ifreq);
-    const point = (p: BandSelectivity['low']) => ({ image: imageOf(p.frequency), rejection: imageRejection(p.tank, p.frequency, imageOf(p.frequency)) });
-    const template = selectivity.middle.tank;
-    const w = (f: number) => 2 * Math.PI * f;
-    const curve = selectivity.curve.frequency.map((f, i) => {
-      // The tank tuned to f, as bandSelectivity builds it: the network that resonates L at f, the coil's Q there.
-      const tank = { ...template, capacitance: 1 / (w(f) * w(f) * design.inductance) - design.strayCapacitance, coilQ: selectivity.curve.coilQ[i], frequency: f };
-      return imageRejection(tank, f, imageOf(f));
-    });
-    image = { low: point(selectivity.low), middle: point(selectivity.middle), high: point(selectivity.high), curve };
-  }
-  const seen = new Set<string>();
-  return {
-    design, coil, coilSpec, selectivity, dial, image,
-    notes: notes.filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
-  };
+  const template = selectivity.middle.tank;
+  const w = (f: number) => 2 * Math.PI * f;
+  const image = imageOf && selectivity.curve.frequency.map((f, i) => {
+    // The tank tuned to f, as bandSelectivity builds it: the network that resonates L at f, the coil's Q there.
+    const tank = { ...template, capacitance: 1 / (w(f) * w(f) * design.inductance) - design.strayCapacitance, coilQ: selectivity.curve.coilQ[i], frequency: f };
+    return imageRejection(tank, f, imageOf(f));
+  });
+  return { dial: { slc: dialLaw({ ...circuit, plates: 'slc' }), slf: dialLaw({ ...circuit, plates: 'slf' }) }, selectivity: selectivity.curve, image };
 }
 
 /** The oscillator's side for a superhet, or undefined for none. */
