@@ -63,8 +63,9 @@ describe.runIf(browserAvailable())('axe-core on every page', () => {
     await hydrated(page);
     // Scroll through the page as a reader would: what is drawn on coming into view (plots with
     // their tables, formulas that then turn out wider than the screen) is drawn before the check.
-    const height = await page.evaluate(() => document.documentElement.scrollHeight);
-    for (let y = 0; y < height; y += 400) {
+    // (The page grows as skipped blocks are drawn at their real height: read its height at each step.)
+    const height = () => page.evaluate(() => document.documentElement.scrollHeight);
+    for (let y = 0; y < await height(); y += 400) {
       await page.evaluate((top) => window.scrollTo(0, top), y);
       await page.waitForTimeout(30);
     }

@@ -25,8 +25,9 @@ function routes(dir = DIST, out: string[] = []): string[] {
 
 /** Scrolls to the end in steps (so what is drawn on coming into view is drawn), builds every plot, then back to the top. */
 async function scrollThrough(page: Page): Promise<void> {
-  const height = await page.evaluate(() => document.documentElement.scrollHeight);
-  for (let y = 0; y < height; y += PHONE.height / 2) {
+  // (The page grows as skipped blocks are drawn at their real height: read its height at each step.)
+  const height = () => page.evaluate(() => document.documentElement.scrollHeight);
+  for (let y = 0; y < await height(); y += PHONE.height / 2) {
     await page.evaluate((top) => window.scrollTo(0, top), y);
     await page.waitForTimeout(30);
   }
