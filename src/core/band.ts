@@ -830,7 +830,8 @@ export function bandSelectivity(input: BandSelectivityInput): BandSelectivity {
     if (fixedQ !== undefined) qAt = () => fixedQ;
     else {
       // designCoil at a few frequencies, monotone cubic between: Q varies smoothly across a band (about as √f).
-      const nodes = Array.from(frequencyGrid({ start: cover.lowFrequency, stop: cover.highFrequency, points: COIL_Q_NODES, spacing: 'linear' }));
+      // Only the low, middle and high frequency when no curve is asked for (they are nodes either way, so their Q is the same).
+      const nodes = Array.from(frequencyGrid({ start: cover.lowFrequency, stop: cover.highFrequency, points: points <= 3 ? 3 : COIL_Q_NODES, spacing: 'linear' }));
       const qs = nodes.map((f) => under('coil', () => designCoil({ ...base, turns, frequency: f } as DesignCoilSpec).q as number));
       qAt = monotoneInterpolator(nodes, qs);
     }
