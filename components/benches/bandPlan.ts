@@ -26,7 +26,7 @@
  */
 import { dialLaw, designForBand, bandSelectivity, type BandDesign, type BandSelectivity, type DialLaw } from '../../src/core/band';
 import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
-import { DesignError, isDesignError } from '../../src/core/errors';
+import { DesignError, isDesignError, withinSpec } from '../../src/core/errors';
 import type { DesignNote } from '../../src/core/notes';
 import { tankImpedance } from '../../src/core/tankKernel';
 import { formatQuantityCompact, parseQuantityRange } from '../../src/quantity';
@@ -44,15 +44,6 @@ export function num(raw: unknown, path: string): number | undefined {
   return typeof v === 'number' ? v : undefined;
 }
 
-/** Runs `fn`, giving a DesignError's field the prefix (the coil's spec builder names paths without `coil.`). */
-function under<T>(prefix: string, fn: () => T): T {
-  try {
-    return fn();
-  } catch (e) {
-    if (isDesignError(e)) throw new DesignError(`${prefix}.${e.field}`, e.message);
-    throw e;
-  }
-}
 
 /** As the Coil bench says it (coilDesign.ts): with bare wire the overall diameter is the bare one, shown at the gauge or diameter. */
 function inCoilTerms<T>(choices: Choices, fn: () => T): T {
@@ -77,7 +68,7 @@ export function capacitorRange(raw: SpecObject, choices: Choices): { min: number
 /** The coil's spec without L, turns or frequency (the band sets them), from the `coil.…` values. */
 export function bandCoilSpec(raw: SpecObject, choices: Choices): DesignCoilSpec {
   const coilRaw = (getPath(raw, COIL_PREFIX) ?? {}) as SpecObject;
-  return under(COIL_PREFIX, () => buildCoilSpec(coilRaw, { ...choices, give: 'L' }));
+  return withinSpec(COIL_PREFIX, () => buildCoilSpec(coilRaw, { ...choices, give: 'L' }));
 }
 
 /** The image response of the tank tuned to f: how far below its response at f, dB (20 log |Z(f)|/|Z(f_image)|, loaded). */

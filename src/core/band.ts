@@ -59,7 +59,7 @@
  */
 import { designCoil, type DesignCoilResult, type DesignCoilSpec } from './coil';
 import { TWO_PI } from './constants';
-import { DesignError, isDesignError, requireFinite, requireInRange, requireNonNegative, requireObject } from './errors';
+import { DesignError, requireFinite, requireInRange, requireNonNegative, requireObject, withinSpec } from './errors';
 import { note, type DesignNote } from './notes';
 import { frequencyGrid } from './sweep';
 import { analyzeTank } from './tank';
@@ -778,15 +778,6 @@ export interface BandSelectivity {
   notes: DesignNote[];
 }
 
-/** Runs `fn`, renaming a DesignError's field with `prefix`. */
-function under<T>(prefix: string, fn: () => T): T {
-  try {
-    return fn();
-  } catch (e) {
-    if (isDesignError(e)) throw new DesignError(`${prefix}.${e.field}`, e.message);
-    throw e;
-  }
-}
 
 /**
  * Q, bandwidth and dynamic resistance across the band: at each frequency f
@@ -802,8 +793,8 @@ function under<T>(prefix: string, fn: () => T): T {
 export function bandSelectivity(input: BandSelectivityInput): BandSelectivity {
   requireObject<BandSelectivityInput>('band', input, 'The selectivity inputs');
   const circuit = requireObject<BandCircuit>('band', input.band, 'The tuned circuit');
-  const l = under('band', () => tankValue('inductance', circuit.inductance, 'Inductance', 'H'));
-  const n = under('band', () => checkNetwork(circuit));
+  const l = withinSpec('band', () => tankValue('inductance', circuit.inductance, 'Inductance', 'H'));
+  const n = withinSpec('band', () => checkNetwork(circuit));
   const cover = coverageOf(n, l);
   requireWidth(cover);
   const points = checkPoints(input.points, 41);
@@ -821,7 +812,7 @@ export function bandSelectivity(input: BandSelectivityInput): BandSelectivity {
   if (input.coil !== undefined) {
     const spec = requireObject<DesignCoilSpec>('coil', input.coil, 'The coil');
     const base = { ...spec, turns: undefined, inductance: undefined, sweepPoints: undefined };
-    coil = under('coil', () => designCoil({ ...base, inductance: l, frequency: middleFrequency } as DesignCoilSpec));
+    coil = withinSpec('coil', () => designCoil({ ...base, inductance: l, frequency: middleFrequency } as DesignCoilSpec));
     const wound = coil;
     const turns = wound.turns;
     if (fixedQ === undefined && wound.q === undefined) {
@@ -832,7 +823,7 @@ export function bandSelectivity(input: BandSelectivityInput): BandSelectivity {
       // designCoil at a few frequencies, monotone cubic between: Q varies smoothly across a band (about as √f).
       // Only the low, middle and high frequency when no curve is asked for (they are nodes either way, so their Q is the same).
       const nodes = Array.from(frequencyGrid({ start: cover.lowFrequency, stop: cover.highFrequency, points: points <= 3 ? 3 : COIL_Q_NODES, spacing: 'linear' }));
-      const qs = nodes.map((f) => under('coil', () => designCoil({ ...base, turns, frequency: f } as DesignCoilSpec).q as number));
+      const qs = nodes.map((f) => withinSpec('coil', () => designCoil({ ...base, turns, frequency: f } as DesignCoilSpec).q as number));
       qAt = monotoneInterpolator(nodes, qs);
     }
     const off = wound.inductance / l - 1;

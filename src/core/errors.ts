@@ -101,3 +101,17 @@ export function requireFiniteResult(field: string, value: number, what: string):
   }
   return value;
 }
+
+/**
+ * Runs `fn`, and names a DesignError it throws by its place in a larger spec:
+ * field 'inductance' becomes 'band.inductance' under the prefix 'band' (a
+ * function that checks a nested object reports the path a bench can route).
+ */
+export function withinSpec<T>(prefix: string, fn: () => T): T {
+  try {
+    return fn();
+  } catch (e) {
+    if (isDesignError(e)) throw new DesignError(`${prefix}.${e.field}`, e.message);
+    throw e;
+  }
+}
