@@ -14,14 +14,13 @@
  * section comes near the screen, as the kit's Plot loads uPlot: the page's
  * first JavaScript then holds only what the answer needs.
  */
-import { createEffect, createMemo, createSignal, For, lazy, Show, type JSX } from 'solid-js';
+import { createEffect, createMemo, createSignal, lazy, Show, type JSX } from 'solid-js';
 import { formatNumber, formatQuantityCompact } from '../../src/quantity';
-import { createBenchState, type BenchState } from '../kit/bench';
-import { createUrlState } from '../kit/createUrlState';
-import { Field } from '../kit/Field';
+import type { BenchState } from '../kit/bench';
+import { Fields } from '../kit/Field';
 import type { Choices, SpecObject } from '../kit/fields';
 import { formatShift } from '../kit/format';
-import { createAwake, inParts, Later, type BenchParts } from '../kit/Later';
+import { createWakingBench, inParts, Later, type BenchParts } from '../kit/Later';
 import { LinkNotices } from '../kit/LinkNotices';
 import { AnswerDock, Summary, type DockedAnswer, type SummaryItem } from '../kit/Summary';
 import { BAND_FIELDS, COIL_KEYS } from './bandFields';
@@ -79,18 +78,11 @@ function summaryItems(p: BandPlan): SummaryItem[] {
   ];
 }
 
-/** Fields of the table, in order. */
-function Fields(props: { bench: BenchState; names: readonly string[] }) {
-  return <For each={props.names}>{(name) => <Field bench={props.bench} name={name} />}</For>;
-}
-
 /** The island, hydrated in parts (kit/Later): no single task blocks a phone for long. */
 export default inParts('band', BandBenchParts);
 
 function BandBenchParts(outer: BenchParts<BandFormulas>) {
-  const bench = createBenchState(BAND_FIELDS);
-  const notices = createUrlState(bench);
-  const awake = createAwake(() => bench.load(outer.early));
+  const { bench, notices, awake } = createWakingBench(BAND_FIELDS, outer.early);
   const [answer, setAnswer] = createSignal<DockedAnswer>();
 
   return (

@@ -11,10 +11,9 @@
 import { createEffect, createMemo, createSignal, Show, untrack, type JSX } from 'solid-js';
 import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
 import { formatNumber, formatQuantity, formatQuantityCompact } from '../../src/quantity';
-import { createBenchState, type BenchState } from '../kit/bench';
-import { createAwake, inParts, Later, type BenchParts } from '../kit/Later';
-import { createUrlState } from '../kit/createUrlState';
-import { Field } from '../kit/Field';
+import type { BenchState } from '../kit/bench';
+import { createWakingBench, inParts, Later, type BenchParts } from '../kit/Later';
+import { Fields } from '../kit/Field';
 import type { Choices, SpecObject } from '../kit/fields';
 import { formatShift } from '../kit/format';
 import { Formula } from '../kit/Formula';
@@ -125,9 +124,7 @@ export default inParts('coil', CoilBenchParts);
 
 function CoilBenchParts(outer: BenchParts<CoilFormulas>) {
   const props = outer.formulas;
-  const bench = createBenchState(COIL_FIELDS);
-  const notices = createUrlState(bench);
-  const awake = createAwake(() => bench.load(outer.early));
+  const { bench, notices, awake } = createWakingBench(COIL_FIELDS, outer.early);
   const [answer, setAnswer] = createSignal<DockedAnswer>();
 
   return (
@@ -135,35 +132,10 @@ function CoilBenchParts(outer: BenchParts<CoilFormulas>) {
       <LinkNotices notices={notices()} />
       <div class="tw-bench-inputs">
         <Later>
-          <Field bench={bench} name="form" />
-          <Field bench={bench} name="give" />
-          <Field bench={bench} name="L" />
-          <Field bench={bench} name="N" />
-          <Field bench={bench} name="dia" />
-          <Field bench={bench} name="D" />
-          <Field bench={bench} name="wind" />
-          <Field bench={bench} name="p" />
-          <Field bench={bench} name="OD" />
-          <Field bench={bench} name="ID" />
-          <Field bench={bench} name="h" />
-          <Field bench={bench} name="core" />
-          <Field bench={bench} name="AL" />
+          <Fields bench={bench} names={['form', 'give', 'L', 'N', 'dia', 'D', 'wind', 'p', 'OD', 'ID', 'h', 'core', 'AL']} />
         </Later>
         <Later>
-          <Field bench={bench} name="mu" />
-          <Field bench={bench} name="mu2" />
-          <Field bench={bench} name="mD" />
-          <Field bench={bench} name="mlen" />
-          <Field bench={bench} name="depth" />
-          <Field bench={bench} name="wire" />
-          <Field bench={bench} name="awg" />
-          <Field bench={bench} name="swg" />
-          <Field bench={bench} name="wd" />
-          <Field bench={bench} name="enamel" />
-          <Field bench={bench} name="wod" />
-          <Field bench={bench} name="f" />
-          <Field bench={bench} name="lead" />
-          <Field bench={bench} name="T" />
+          <Fields bench={bench} names={['mu', 'mu2', 'mD', 'mlen', 'depth', 'wire', 'awg', 'swg', 'wd', 'enamel', 'wod', 'f', 'lead', 'T']} />
         </Later>
         <Show when={bench.generalError()}>
           <p class="tw-bench-error" role="alert">{bench.generalError()}</p>

@@ -15,13 +15,11 @@ import {
   capacitanceForFrequency, characteristicImpedance, inductanceForFrequency, inductiveReactance, resonantFrequency,
 } from '../../src/core/resonance';
 import { formatQuantity, formatQuantityCompact } from '../../src/quantity';
-import { createBenchState } from '../kit/bench';
-import { createUrlState } from '../kit/createUrlState';
 import { Field } from '../kit/Field';
 import { defineFields, POSITIVE } from '../kit/fields';
 import { formatShift } from '../kit/format';
 import { Formula } from '../kit/Formula';
-import { createAwake, readEarlyInput } from '../kit/Later';
+import { createWakingBench, readEarlyInput } from '../kit/Later';
 import { LinkNotices } from '../kit/LinkNotices';
 import { NoteList } from '../kit/Note';
 import { ResultRow } from '../kit/ResultRow';
@@ -134,10 +132,7 @@ function summaryItems(r: ResonanceResult): SummaryItem[] {
 }
 
 export default function ResonanceBench(props: { formulas: ResonanceFormulas }) {
-  const early = readEarlyInput('resonance');
-  const bench = createBenchState<ResonanceSpec>(RESONANCE_FIELDS);
-  const notices = createUrlState(bench);
-  const awake = createAwake(() => bench.load(early));
+  const { bench, notices, awake } = createWakingBench<ResonanceSpec>(RESONANCE_FIELDS, readEarlyInput('resonance'));
   const calc = bench.compute((spec) => solveResonance(spec));
   const r = calc.result;
   const stale = () => calc.stale();

@@ -4,7 +4,7 @@
  * Shown only while the field applies; its label, symbol and hint follow the
  * choices; a DesignError routed to it appears under it.
  */
-import { Show, type JSX } from 'solid-js';
+import { For, Show, type JSX } from 'solid-js';
 import type { BenchState } from './bench';
 import { Choice } from './Choice';
 import { fieldByKey, resolve, sayRule, type FieldDef } from './fields';
@@ -56,4 +56,9 @@ export function Field(props: FieldProps) {
         )}
     </Show>
   );
+}
+
+/** Fields of a bench's table, in the order named. */
+export function Fields(props: { bench: BenchState<unknown>; names: readonly string[] }) {
+  return <For each={props.names}>{(name) => <Field bench={props.bench} name={name} />}</For>;
 }

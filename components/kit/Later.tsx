@@ -18,7 +18,9 @@
  */
 import { createSignal, lazy, onMount, type Component, type JSX } from 'solid-js';
 import { isServer } from 'solid-js/web';
-import type { BenchSnapshot } from './fields';
+import { createBenchState, type BenchState } from './bench';
+import { createUrlState } from './createUrlState';
+import type { BenchSnapshot, FieldTable, SpecObject } from './fields';
 
 interface LaterProps {
   children: JSX.Element;
@@ -53,6 +55,18 @@ export function createAwake(restore?: () => void): () => boolean {
     setAwake(true);
   });
   return awake;
+}
+
+/**
+ * A bench's state as a bench hydrated in parts starts it: the state from its
+ * table, the link read and written (createUrlState), and what was typed
+ * before the scripts arrived given back once awake (after the link).
+ */
+export function createWakingBench<S = SpecObject>(table: FieldTable, early: Partial<BenchSnapshot>): { bench: BenchState<S>; notices: () => string[]; awake: () => boolean } {
+  const bench = createBenchState<S>(table);
+  const notices = createUrlState(bench);
+  const awake = createAwake(() => bench.load(early));
+  return { bench, notices, awake };
 }
 
 /**
