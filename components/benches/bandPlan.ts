@@ -6,7 +6,7 @@
  *   → bandSelectivity (the coil wound once by designCoil for that L at
  *     mid-band, its Q across the band, the tank's unloaded and loaded Q,
  *     bandwidth and dynamic resistance at each frequency)
- *   → the image response of the signal tank (tankImpedance) for a superhet
+ *   → the image rejection of the signal tank (the core's imageRejection) for a superhet
  *   → dialLaw (frequency against rotation, straight-line capacitance and
  *     straight-line frequency plates), with the selectivity and image curves
  *     worked out only when a plot first asks (`curves`): each point of the
@@ -28,7 +28,8 @@ import { dialLaw, designForBand, bandSelectivity, type BandDesign, type BandSele
 import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
 import { DesignError, isDesignError, withinSpec } from '../../src/core/errors';
 import type { DesignNote } from '../../src/core/notes';
-import { tankImpedance } from '../../src/core/tankKernel';
+import type { TankInput } from '../../src/core/tankModel';
+import { imageRejection, type OscillatorSide } from '../../src/core/image';
 import { formatQuantityCompact, parseQuantityRange } from '../../src/quantity';
 import { getPath, type Choices, type SpecObject } from '../kit/fields';
 import { capacitorKindRange, COIL_PREFIX } from './bandFields';
@@ -71,11 +72,16 @@ export function bandCoilSpec(raw: SpecObject, choices: Choices): DesignCoilSpec 
   return withinSpec(COIL_PREFIX, () => buildCoilSpec(coilRaw, { ...choices, give: 'L' }));
 }
 
-/** The image response of the tank tuned to f: how far below its response at f, dB (20 log |Z(f)|/|Z(f_image)|, loaded). */
-function imageRejection(tank: BandSelectivity['middle']['tank'], f: number, image: number): number {
-  const at = tankImpedance(tank, f, { loaded: true });
-  const im = tankImpedance(tank, image, { loaded: true });
-  return 20 * Math.log10(Math.hypot(at.re, at.im) / Math.hypot(im.re, im.im));
+/** The superhet's IF and oscillator side, when the bench has one. */
+interface Superhet {
+  intermediateFrequency: number;
+  oscillatorSide: OscillatorSide;
+}
+
+/** The core's image rejection of the tank tuned to f (its own loss figures at f): the image and how far below f's response, dB. */
+function imageAt(tank: TankInput, f: number, superhet: Superhet): { image: number; rejection: number } {
+  const r = imageRejection({ tank, signalFrequency: f, ...superhet });
+  return { image: r.imageFrequency, rejection: r.rejection };
 }
 
 export interface ImageResponse {
@@ -135,20 +141,20 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
   const coilSpec = { ...base, inductance: design.inductance, frequency: selectivity.middle.frequency } as DesignCoilSpec;
   const side = superhetSide(choices);
   const ifreq = num(raw, 'intermediateFrequency');
-  const imageOf = side === undefined || ifreq === undefined ? undefined : (f: number) => Math.abs(f + 2 * (side === 'above' ? 1 : -1) * ifreq);
-  const point = (p: BandSelectivity['low'], im: (f: number) => number) => ({ image: im(p.frequency), rejection: imageRejection(p.tank, p.frequency, im(p.frequency)) });
-  const image = imageOf && { low: point(selectivity.low, imageOf), middle: point(selectivity.middle, imageOf), high: point(selectivity.high, imageOf) };
+  const superhet: Superhet | undefined = side === undefined || ifreq === undefined ? undefined : { intermediateFrequency: ifreq, oscillatorSide: side };
+  const point = (p: BandSelectivity['low'], sh: Superhet) => imageAt(p.tank, p.frequency, sh);
+  const image = superhet && { low: point(selectivity.low, superhet), middle: point(selectivity.middle, superhet), high: point(selectivity.high, superhet) };
   let curves: BandCurves | undefined;
   const seen = new Set<string>();
   return {
     design, coil, coilSpec, selectivity, image,
-    curves: () => (curves ??= bandCurves(design, selectivityAt(SELECTIVITY_POINTS), imageOf)),
+    curves: () => (curves ??= bandCurves(design, selectivityAt(SELECTIVITY_POINTS), superhet)),
     notes: [...design.notes, ...selectivity.notes].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
   };
 }
 
 /** The dial laws, the selectivity curve and the image rejection along it. */
-function bandCurves(design: BandDesign, selectivity: BandSelectivity, imageOf: ((f: number) => number) | undefined): BandCurves {
+function bandCurves(design: BandDesign, selectivity: BandSelectivity, superhet: Superhet | undefined): BandCurves {
   const circuit = {
     inductance: design.inductance,
     strayCapacitance: design.strayCapacitance,
@@ -160,10 +166,10 @@ function bandCurves(design: BandDesign, selectivity: BandSelectivity, imageOf: (
   };
   const template = selectivity.middle.tank;
   const w = (f: number) => 2 * Math.PI * f;
-  const image = imageOf && selectivity.curve.frequency.map((f, i) => {
+  const image = superhet && selectivity.curve.frequency.map((f, i) => {
     // The tank tuned to f, as bandSelectivity builds it: the network that resonates L at f, the coil's Q there.
     const tank = { ...template, capacitance: 1 / (w(f) * w(f) * design.inductance) - design.strayCapacitance, coilQ: selectivity.curve.coilQ[i], frequency: f };
-    return imageRejection(tank, f, imageOf(f));
+    return imageAt(tank, f, superhet).rejection;
   });
   return { dial: { slc: dialLaw({ ...circuit, plates: 'slc' }), slf: dialLaw({ ...circuit, plates: 'slf' }) }, selectivity: selectivity.curve, image };
 }
