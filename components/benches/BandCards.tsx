@@ -8,6 +8,7 @@
  * comes near the screen, as the kit's Plot loads uPlot.
  */
 import { createMemo, createSignal, For, onCleanup, onMount, Show, type Accessor, type JSX } from 'solid-js';
+import type { SlugTuning } from '../../src/core/band';
 import type { PairCandidate } from '../../src/core/pairs';
 import { formatNumber, formatQuantity, formatQuantityCompact } from '../../src/quantity';
 import type { BenchState } from '../kit/bench';
@@ -110,6 +111,12 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
         </ResultRow>
       </Later>
 
+      <Show when={p()?.slug}>
+        <Later>
+          <SlugRows slug={p()!.slug!} stale={stale()} />
+        </Later>
+      </Show>
+
       <Later>
         <section class="tw-table-block band-block" aria-labelledby="sel-title" classList={{ 'tw-result--stale': stale() }}>
           <h2 id="sel-title">Selectivity across the band</h2>
@@ -152,13 +159,14 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
         <Show when={p()}>
           <Plot
             id="plot-dial"
-            caption="Tuning curve: frequency against dial rotation, 0 % with the plates meshed. Solid: straight-line-capacitance plates; dashed: straight-line-frequency plates cut for this circuit. The padder crowds the meshed end of a straight-line-capacitance dial."
+            caption={`Tuning curve: frequency against dial rotation, 0 % with the plates meshed. Solid: straight-line-capacitance plates; dashed: straight-line-frequency plates cut for this circuit${p()!.ownDial ? '; third: your plate table, 0 % at its first angle' : ''}. The padder crowds the meshed end of a straight-line-capacitance dial.`}
             x={p()!.curves().dial.slc.percent}
             xLabel="Rotation"
             formatX={tickPercent}
             series={[
               { label: 'SLC', values: p()!.curves().dial.slc.frequency, unit: 'Hz' },
               { label: 'SLF', values: p()!.curves().dial.slf.frequency, unit: 'Hz', dash: true },
+              ...(p()!.ownDial ? [{ label: 'Your plates', values: p()!.ownDial!.frequency, unit: 'Hz' }] : []),
             ]}
             yLabel="Frequency"
             formatY={tickHz}
@@ -222,6 +230,33 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
         </section>
       </Later>
     </>
+  );
+}
+
+/** A tuning slug: how far it moves the band, and where to set it for the band asked. */
+function SlugRows(props: { slug: SlugTuning; stale: boolean }) {
+  const s = () => props.slug;
+  return (
+    <section class="band-stack" aria-labelledby="slug-title">
+      <h2 class="band-heading" id="slug-title">Tuning slug</h2>
+      <ResultRow id="out-slug-low" label="Lowest frequency, slug fully in" value={s().lowestFrequency} unit="Hz" significant={4} stale={props.stale} />
+      <ResultRow id="out-slug-high" label="Highest frequency, slug fully out" value={s().highestFrequency} unit="Hz" significant={4} stale={props.stale}>
+        <p class="tw-formula-meta" id="out-slug-detail">
+          The slug runs the coil from {formatQuantity(s().minInductance, 'H', 4)} to {formatQuantity(s().maxInductance, 'H', 4)}: it moves the whole band,
+          by a factor of up to {formatNumber(s().slugFrequencyRatio, 4)}, without widening it (the capacitor network sets the ratio, {formatNumber(s().capacitorRatio, 4)}).
+          Slug in: {bandText(s().slugIn.lowFrequency, s().slugIn.highFrequency)}; slug out: {bandText(s().slugOut.lowFrequency, s().slugOut.highFrequency)}.
+        </p>
+      </ResultRow>
+      <Show when={s().setting}>
+        <ResultRow id="out-slug-set" label="Slug setting for the band asked" symbol="L" value={s().setting!.inductance} unit="H" significant={4} stale={props.stale}>
+          <p class="tw-formula-meta">
+            Any inductance from {formatQuantity(s().setting!.inductanceForLowEnd, 'H', 4)} to {formatQuantity(s().setting!.inductanceForHighEnd, 'H', 4)} covers it;
+            {s().setting!.withinSlugRange ? ` the middle leaves ${formatNumber(s().setting!.spare * 100, 2)} % spare at each end.` : ' the slug does not reach that window (see the notes).'}
+            {' '}Thomson’s formula with L scaled: the slug moves every frequency by √(L/L′).
+          </p>
+        </ResultRow>
+      </Show>
+    </section>
   );
 }
 

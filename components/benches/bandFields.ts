@@ -9,7 +9,9 @@
  *
  * Spec paths are the core's names: `lowFrequency`/`highFrequency` and
  * `minCapacitance`/`maxCapacitance` (designForBand), `strayCapacitance`,
- * `intermediateFrequency`, `coilQ`, `capacitorQ`, `sourceResistance`,
+ * `intermediateFrequency`, `oscillatorStrayCapacitance` (designTracking),
+ * `plates` (dialLaw's plate table), `slugAdjustmentPercent` (slugTuning's
+ * `adjustment` as a percentage), `coilQ`, `capacitorQ`, `sourceResistance`,
  * `loadResistance` (bandSelectivity), `capacitorSeries`, `inductorSeries`
  * (resonantPairs), and `coil.<the Coil bench's path>` for the coil, as
  * bandSelectivity names the coil's errors. Percentages (margin, tolerances)
@@ -96,6 +98,16 @@ export const BAND_FIELDS: FieldTable = defineFields([
     options: [['auto', 'Padder if needed'], ['trimmer', 'Trimmer only']],
     answers: ['trimmerCapacitance', 'padderCapacitance', 'band.trimmerCapacitance', 'band.padderCapacitance'],
   },
+  {
+    kind: 'number', key: 'slug', path: 'slugAdjustmentPercent', label: 'Tuning slug, ±% of L (optional)', what: 'Slug adjustment', default: '',
+    optional: true, rule: { min: 0, max: 90, minExclusive: true, unit: '%' }, answers: ['adjustment', 'minInductance', 'maxInductance'],
+    hint: 'a slug in the former moves L this far either way; blank: no slug',
+  },
+  {
+    kind: 'points', key: 'plates', path: 'plates', label: 'Your capacitor’s plates (optional)', what: 'Plate table', unit: 'F', xName: 'angle',
+    xRule: { min: -3600, max: 3600, unit: '°' }, default: '', optional: true, allowed: POSITIVE,
+    hint: 'capacitance at a few dial angles, e.g. 0: 365p; 90: 150p; 180: 10p; blank: the two standard shapes only',
+  },
 
   // — superheterodyne —
   {
@@ -105,6 +117,11 @@ export const BAND_FIELDS: FieldTable = defineFields([
   {
     kind: 'quantity', key: 'IF', path: 'intermediateFrequency', label: 'Intermediate frequency', symbol: 'IF', unit: 'Hz', default: '455 kHz',
     allowed: POSITIVE, when: superhet, hint: 'e.g. 455k, 1.6 MHz, 10.7M', answers: ['trackingFrequencies', 'oscillator.inductance'],
+  },
+  {
+    kind: 'quantity', key: 'Cso', path: 'oscillatorStrayCapacitance', label: 'Strays across the oscillator coil (optional)', what: 'Oscillator strays',
+    symbol: 'Cₛₒ', unit: 'F', default: '', optional: true, allowed: NON_NEGATIVE, when: superhet,
+    hint: 'blank: the same as the signal circuit’s',
   },
 
   // — the coil: the Coil bench's fields —

@@ -24,10 +24,10 @@
  * core's own names, `coil.…` for the coil (bandSelectivity's prefix, and
  * the spec builder's errors are given it here too).
  */
-import { dialLaw, designForBand, bandSelectivity, type BandDesign, type BandSelectivity, type DialLaw } from '../../src/core/band';
+import { dialLaw, designForBand, bandSelectivity, slugTuning, type BandDesign, type BandSelectivity, type DialLaw, type PlatePoint, type SlugTuning } from '../../src/core/band';
 import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
 import { DesignError, isDesignError, withinSpec } from '../../src/core/errors';
-import type { DesignNote } from '../../src/core/notes';
+import { note, type DesignNote } from '../../src/core/notes';
 import type { TankInput } from '../../src/core/tankModel';
 import { imageRejection, type OscillatorSide } from '../../src/core/image';
 import { formatQuantityCompact, parseQuantityRange } from '../../src/quantity';
@@ -93,7 +93,7 @@ export interface ImageResponse {
 
 /** The curves the plots draw: worked out when a plot first asks (each point of the selectivity is a tank analysis). */
 export interface BandCurves {
-  /** Frequency against rotation for straight-line-capacitance and straight-line-frequency plates. */
+  /** Frequency against rotation for straight-line-capacitance and straight-line-frequency plates (the user's own: `ownDial` of the plan). */
   dial: { slc: DialLaw; slf: DialLaw };
   /** Selectivity at SELECTIVITY_POINTS frequencies across the band. */
   selectivity: BandSelectivity['curve'];
@@ -111,6 +111,10 @@ export interface BandPlan {
   selectivity: BandSelectivity;
   /** Superhet only: the signal tank's response at the image. */
   image?: ImageResponse;
+  /** With a tuning slug: the band at both ends of its travel and its setting for the band asked. */
+  slug?: SlugTuning;
+  /** The user's plates in this circuit (worked out with the plan, so a bad table is told at its field at once). */
+  ownDial?: DialLaw;
   /** The plotted curves, worked out on first call and kept. */
   curves: () => BandCurves;
   /** Every note of the plan, without repeats. */
@@ -144,26 +148,55 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
   const superhet: Superhet | undefined = side === undefined || ifreq === undefined ? undefined : { intermediateFrequency: ifreq, oscillatorSide: side };
   const point = (p: BandSelectivity['low'], sh: Superhet) => imageAt(p.tank, p.frequency, sh);
   const image = superhet && { low: point(selectivity.low, superhet), middle: point(selectivity.middle, superhet), high: point(selectivity.high, superhet) };
+  const slug = slugFor(raw, design);
+  const ownDial = ownDialLaw(raw, design);
   let curves: BandCurves | undefined;
   const seen = new Set<string>();
   return {
-    design, coil, coilSpec, selectivity, image,
+    design, coil, coilSpec, selectivity, image, slug, ownDial,
     curves: () => (curves ??= bandCurves(design, selectivityAt(SELECTIVITY_POINTS), superhet)),
-    notes: [...design.notes, ...selectivity.notes].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
+    notes: [...design.notes, ...selectivity.notes, ...(slug?.notes ?? []), ...(ownDial?.notes ?? [])].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
   };
 }
 
-/** The dial laws, the selectivity curve and the image rejection along it. */
-function bandCurves(design: BandDesign, selectivity: BandSelectivity, superhet: Superhet | undefined): BandCurves {
-  const circuit = {
+/** The designed circuit's coil and capacitor network, as dialLaw and slugTuning take it. */
+function circuitOf(design: BandDesign) {
+  return {
     inductance: design.inductance,
     strayCapacitance: design.strayCapacitance,
     trimmerCapacitance: design.trimmerCapacitance,
     padderCapacitance: design.padderCapacitance,
     minCapacitance: design.minCapacitance,
     maxCapacitance: design.maxCapacitance,
-    points: DIAL_POINTS,
   };
+}
+
+/** Slug tuning of the designed coil, ±the percentage typed, over the band asked; undefined without a slug. */
+function slugFor(raw: SpecObject, design: BandDesign): SlugTuning | undefined {
+  const percent = num(raw, 'slugAdjustmentPercent');
+  if (percent === undefined) return undefined;
+  const { inductance, ...network } = circuitOf(design);
+  return slugTuning({ ...network, inductance, adjustment: percent / 100, lowFrequency: design.requestedLowFrequency, highFrequency: design.requestedHighFrequency });
+}
+
+/** The dial law of the user's plate table in the designed circuit; undefined without one. */
+function ownDialLaw(raw: SpecObject, design: BandDesign): DialLaw | undefined {
+  const table = getPath(raw, 'plates');
+  if (!Array.isArray(table)) return undefined;
+  const plates: PlatePoint[] = table.map((p: { x: number; y: number }) => ({ angle: p.x, capacitance: p.y }));
+  const law = dialLaw({ ...circuitOf(design), plates, points: DIAL_POINTS });
+  const ends = [plates[0].capacitance, plates[plates.length - 1].capacitance];
+  const [lo, hi] = [Math.min(...ends), Math.max(...ends)];
+  const off = Math.max(Math.abs(lo / design.minCapacitance - 1), Math.abs(hi / design.maxCapacitance - 1));
+  if (off > 0.05) {
+    law.notes.push(note('info', `Your plate table runs ${formatQuantityCompact(lo, 'F', 3)} to ${formatQuantityCompact(hi, 'F', 3)}, not the ${formatQuantityCompact(design.minCapacitance, 'F', 3)} to ${formatQuantityCompact(design.maxCapacitance, 'F', 3)} the band was designed with: its tuning curve covers another band. Give the capacitor's range from the same measurement.`, 'plates'));
+  }
+  return law;
+}
+
+/** The dial laws, the selectivity curve and the image rejection along it. */
+function bandCurves(design: BandDesign, selectivity: BandSelectivity, superhet: Superhet | undefined): BandCurves {
+  const circuit = { ...circuitOf(design), points: DIAL_POINTS };
   const template = selectivity.middle.tank;
   const w = (f: number) => 2 * Math.PI * f;
   const image = superhet && selectivity.curve.frequency.map((f, i) => {

@@ -39,6 +39,7 @@ export function trackBand(raw: SpecObject, choices: Choices): BandTracking | nul
     intermediateFrequency: ifreq,
     oscillatorSide: side,
     signal: design,
+    oscillatorStrayCapacitance: num(raw, 'oscillatorStrayCapacitance'),
     points: TRACKING_POINTS,
   });
   const notes = [...tracking.notes];

@@ -26,6 +26,7 @@ function defaultHint(f: FieldDef): string | undefined {
   if (f.kind === 'quantity') return `Unit: ${f.unit}`;
   if (f.kind === 'range') return `two values, low..high, e.g. 10p..365p (${f.unit})`;
   if (f.kind === 'number') return sayRule(f.rule ?? {});
+  if (f.kind === 'points') return `points as ${f.xName}: value, separated by semicolons (${f.unit})`;
   return undefined;
 }
 

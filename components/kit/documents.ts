@@ -10,7 +10,7 @@
  * With a BenchState: `bench.load(documentToSnapshot(table, doc).snapshot)`,
  * `snapshotToDocument(table, bench.snapshot())`, `bench.load(specToSnapshot(table, spec, choices))`.
  */
-import { formatQuantityCompact } from '../../src/quantity';
+import { formatQuantityCompact, type QuantityPoint, type QuantityUnit } from '../../src/quantity';
 import { lowEndWithSharedUnit, splitRange } from '../../src/quantity/parse';
 import {
   defaultChoices, defaultSnapshot, defaultText, fieldsInUse, getPath, pathsOf, putValue, readFieldText, refuseLinkText, setPath, whatOf,
@@ -86,6 +86,13 @@ export function documentToSnapshot(table: FieldTable, doc: unknown): { snapshot:
   return { snapshot, notices };
 }
 
+/** A table's SI points as a field's text ("0: 365p; 180: 10p"); undefined unless every point is two finite numbers. */
+function writePoints(points: unknown[], unit: QuantityUnit, significant: number): string | undefined {
+  const ok = points.every((p) => typeof p === 'object' && p !== null && Number.isFinite((p as QuantityPoint).x) && Number.isFinite((p as QuantityPoint).y));
+  if (!ok || points.length === 0) return undefined;
+  return (points as QuantityPoint[]).map((p) => `${Number(p.x.toPrecision(significant))}: ${formatQuantityCompact(p.y, unit, significant)}`).join('; ');
+}
+
 /**
  * Field texts for an SI spec (a coil handed back from the Tank bench, a
  * design read from a shop-sheet file): each value field in use under
@@ -104,6 +111,7 @@ export function specToSnapshot(table: FieldTable, spec: unknown, choices: Choice
   const snapshot = defaultSnapshot(table, chosen);
   const write = (f: ValueFieldDef, v: unknown): string | undefined => {
     if (typeof v === 'string') return v;
+    if (f.kind === 'points' && Array.isArray(v)) return writePoints(v, f.unit, significant);
     if (typeof v !== 'number' || !Number.isFinite(v)) return undefined;
     return f.kind === 'number' ? String(Number(v.toPrecision(significant))).replace('e+', 'e') : formatQuantityCompact(v, f.unit, significant);
   };

@@ -25,8 +25,9 @@
  */
 import {
   EXPRESSION_CONSTANTS, EXPRESSION_FUNCTIONS, checkRange, formatQuantityCompact, isQuantityError, looksLikeExpression,
-  looksLikeRange, parsePlainNumber, parseQuantity, parseQuantityAsync, parseQuantityRange, parseQuantityRangeAsync,
-  quoteText, sayBound, splitRange, type NumberRange, type PlainNumberRule, type QuantityRange, type QuantityUnit,
+  looksLikeRange, parsePlainNumber, parseQuantity, parseQuantityAsync, parseQuantityPoints, parseQuantityRange, parseQuantityRangeAsync,
+  quoteText, sayBound, splitRange, MAX_POINTS_LENGTH, type NumberRange, type PlainNumberRule, type QuantityPoint, type QuantityRange,
+  type QuantityUnit,
 } from '../../src/quantity';
 import { lowEndWithSharedUnit } from '../../src/quantity/parse';
 
@@ -101,6 +102,25 @@ export interface RangeFieldDef extends FieldBase {
   allowed?: NumberRange;
 }
 
+/**
+ * A short table typed as one text ("0: 365p; 90: 160p; 180: 10p"): points of
+ * a plain number and a quantity, filling one spec path with `{ x, y }[]` in
+ * the order typed (a variable capacitor's plates at a few angles).
+ */
+export interface PointsFieldDef extends FieldBase {
+  kind: 'points';
+  /** Unit of each point's quantity. */
+  unit: QuantityUnit;
+  path: string;
+  /** Name of each point's number in messages ("angle"), and its rule (range, unit such as °). */
+  xName: string;
+  xRule?: PlainNumberRule;
+  default: Dynamic<string>;
+  optional?: boolean;
+  /** Values allowed for each quantity, SI. */
+  allowed?: NumberRange;
+}
+
 /** One of a few values: a radio group, or a select for long lists (wire gauges). */
 export interface ChoiceFieldDef extends FieldBase {
   kind: 'choice';
@@ -113,9 +133,9 @@ export interface ChoiceFieldDef extends FieldBase {
   display?: 'radio' | 'select';
 }
 
-export type ValueFieldDef = QuantityFieldDef | NumberFieldDef | RangeFieldDef;
-/** What a value field gives: SI number, or both ends of a range. */
-export type FieldValue = number | QuantityRange;
+export type ValueFieldDef = QuantityFieldDef | NumberFieldDef | RangeFieldDef | PointsFieldDef;
+/** What a value field gives: SI number, both ends of a range, or a table's points. */
+export type FieldValue = number | QuantityRange | QuantityPoint[];
 export type FieldDef = ValueFieldDef | ChoiceFieldDef;
 export type FieldTable = readonly FieldDef[];
 
@@ -129,7 +149,7 @@ export interface BenchSnapshot {
 export interface SpecObject {
   [key: string]: SpecLeaf;
 }
-export type SpecLeaf = string | number | SpecObject;
+export type SpecLeaf = string | number | SpecObject | QuantityPoint[];
 
 /**
  * What a draft or a shop-sheet file stores: the choices, and the spec written
@@ -298,6 +318,7 @@ export function readFieldTextSync(f: ValueFieldDef, text: string, choices: Choic
   try {
     if (f.kind === 'number') return { kind: 'value', value: parsePlainNumber(text, f.rule ?? {}, what) };
     if (f.kind === 'range') return { kind: 'value', value: parseQuantityRange(text, f.unit, { what, allowed: f.allowed, format: boundFormat(f.unit) }) };
+    if (f.kind === 'points') return { kind: 'value', value: parseQuantityPoints(text, f.unit, { what, xName: f.xName, xRule: f.xRule, allowed: f.allowed, format: boundFormat(f.unit) }) };
     if (looksLikeExpression(text) && !looksLikeRange(text)) return { kind: 'expression' };
     const v = parseQuantity(text, f.unit);
     return { kind: 'value', value: checkRange(v, f.allowed, text, what, undefined, boundFormat(f.unit)) };
@@ -347,6 +368,8 @@ export const MAX_LINK_VALUE = 120;
 export const MAX_LINK_PARAMS = 40;
 
 const LINK_CHARS = /^[0-9A-Za-z .,+\-−*×/÷^()µμΩΩ"″π…–—]*$/u;
+/** A typed table: numbers with units, their separators (: = ; new line) and the degree sign. */
+const POINTS_CHARS = /^[0-9A-Za-z .+\-−:=;°µμΩΩ\n\r]*$/u;
 const NUMBER_TOKEN = /\d[\d.]*(?:[eE][+-]?\d+)?[A-Za-zµμΩΩ"″]*\d*/gu;
 const LINK_WORDS = new Set([...EXPRESSION_CONSTANTS, ...EXPRESSION_FUNCTIONS, 'π']);
 
@@ -397,6 +420,12 @@ export function refuseLinkText(f: FieldDef, text: string, choices: Choices): str
   if (text === '') return f.optional ? null : 'empty, and this value is needed';
   const what = whatOf(f, choices);
   if (f.kind === 'number') return refusePlainNumberLinkText(text, f.rule, what);
+  if (f.kind === 'points') {
+    if (text.length > MAX_POINTS_LENGTH) return `longer than ${MAX_POINTS_LENGTH} characters`;
+    if (!POINTS_CHARS.test(text)) return 'contains characters no table of values uses';
+    const r = readFieldTextSync(f, text, choices);
+    return r.kind === 'error' ? r.message : null;
+  }
   if (f.kind === 'range') {
     if (text.length > MAX_LINK_VALUE) return `longer than ${MAX_LINK_VALUE} characters`;
     if (!LINK_CHARS.test(text)) return 'contains characters no quantity uses';
@@ -554,7 +583,7 @@ export function setPath(obj: SpecObject, path: string, value: SpecLeaf): void {
   for (const part of parts.slice(0, -1)) {
     const next = at[part];
     if (next === undefined) at = at[part] = {};
-    else if (typeof next === 'object') at = next;
+    else if (typeof next === 'object' && !Array.isArray(next)) at = next;
     else throw new Error(`spec path ${path}: ${part} already holds a value`);
   }
   const last = parts[parts.length - 1];
@@ -568,7 +597,7 @@ export function putValue(spec: SpecObject, f: ValueFieldDef, value: FieldValue):
     const r = value as QuantityRange;
     setPath(spec, f.low, r.low);
     setPath(spec, f.high, r.high);
-  } else setPath(spec, f.path, value as number);
+  } else setPath(spec, f.path, value as number | QuantityPoint[]);
 }
 
 /** Re-exported so a table can declare ranges without importing the quantity layer. */

@@ -76,6 +76,7 @@ export { QUANTITY_UNITS } from './units';
 export { parseQuantity, looksLikeExpression, looksLikeRange, splitRange, MAX_QUANTITY_LENGTH } from './parse';
 export { parseQuantityAsync } from './async';
 export { parseQuantityRange, parseQuantityRangeAsync, type QuantityRange, type QuantityRangeOptions } from './range';
+export { parseQuantityPoints, MAX_POINTS_LENGTH, type QuantityPoint, type QuantityPointsOptions } from './points';
 export {
   parsePlainNumber, checkRange, rangeProblem, rangeMessage, quoteText, sayBound, POSITIVE, NON_NEGATIVE,
   type NumberRange, type PlainNumberRule,

@@ -169,11 +169,13 @@ describe('Band plan', () => {
     expect(trackBand(raw, { ...defaultChoices(TABLE), osc: 'none' })).toBeNull();
   });
 
-  it('tracking: the oscillator runs exactly at signal + IF at its three points, by Thomson’s formula with its own parts', async () => {
-    const s = stateOf({ osc: 'above' }, { band: '0.55..1.6M', C: '10p..365p', IF: '455k', margin: '0' });
+  it.each([['', 15e-12], ['27p', 27e-12]])('tracking (oscillator strays “%s”): the oscillator runs exactly at signal + IF at its three points, by Thomson’s formula with its own parts', async (cso, stray) => {
+    const s = stateOf({ osc: 'above' }, { band: '0.55..1.6M', C: '10p..365p', IF: '455k', margin: '0', Cso: cso });
     const { raw } = await run(s);
     const t = trackBand(raw, s.choices)!.tracking;
     const o = t.oscillator;
+    // blank: the signal circuit's 15 pF; given: its own
+    expect(o.strayCapacitance).toBeCloseTo(stray, 18);
     const sig = planBand(raw, s.choices).design;
     const tank = (k: typeof o, cv: number) => k.strayCapacitance + (k.padderCapacitance * (cv + k.trimmerCapacitance)) / (k.padderCapacitance + cv + k.trimmerCapacitance);
     const sigTank = (cv: number) => sig.strayCapacitance + (sig.padderCapacitance === undefined ? cv + sig.trimmerCapacitance
@@ -188,6 +190,83 @@ describe('Band plan', () => {
       }
       expect(rel(thomson(o.inductance, tank(o, (lo + hi) / 2)), f + 455e3)).toBeLessThan(1e-7);
     }
+  });
+});
+
+describe('Tuning slug and plate table', () => {
+  // Thomson's formula (Terman 1943, section 3) with the designed network, written here.
+  const network = (d: BandPlan['design'], cv: number) => d.strayCapacitance
+    + (d.padderCapacitance === undefined ? cv + d.trimmerCapacitance : (d.padderCapacitance * (cv + d.trimmerCapacitance)) / (d.padderCapacitance + cv + d.trimmerCapacitance));
+
+  it('a ±10 % slug moves the band by √(L/L′) without widening it, and sets the designed L for the band asked', async () => {
+    const { plan } = await run(stateOf({}, { slug: '10' }));
+    const d = plan!.design;
+    const slug = plan!.slug!;
+    expect(rel(slug.lowestFrequency, thomson(1.1 * d.inductance, network(d, d.maxCapacitance)))).toBeLessThan(1e-12);
+    expect(rel(slug.highestFrequency, thomson(0.9 * d.inductance, network(d, d.minCapacitance)))).toBeLessThan(1e-12);
+    expect(rel(slug.slugIn.frequencyRatio, slug.slugOut.frequencyRatio)).toBeLessThan(1e-12);
+    // the band asked lies inside the designed one (the margin), so the designed L is inside the slug's window
+    const set = slug.setting!;
+    expect(set.withinSlugRange).toBe(true);
+    expect(set.inductanceForLowEnd).toBeLessThanOrEqual(d.inductance * (1 + 1e-12));
+    expect(set.inductanceForHighEnd).toBeGreaterThanOrEqual(d.inductance * (1 - 1e-12));
+    expect(thomson(set.inductanceForLowEnd, network(d, d.maxCapacitance))).toBeCloseTo(d.requestedLowFrequency, 0);
+  });
+
+  it('no slug: none in the plan; a slug the core refuses is told at its field', async () => {
+    expect((await run(stateOf({}))).plan!.slug).toBeUndefined();
+    const f = fieldByKey(TABLE, 'slug') as ValueFieldDef;
+    expect(readFieldTextSync(f, '95', {}).kind).toBe('error');
+    expect(readFieldTextSync(f, '0', {}).kind).toBe('error');
+  });
+
+  it('the user’s plate table: Thomson’s frequency at each of its points in the designed circuit', async () => {
+    const { plan } = await run(stateOf({}, { plates: '0: 365p; 45°: 250p; 90: 150p; 135: 60p; 180: 10p' }));
+    const d = plan!.design;
+    const law = plan!.ownDial!;
+    expect(law.plates).toBe('table');
+    expect(law.percent[0]).toBe(0);
+    expect(law.percent[law.percent.length - 1]).toBe(100);
+    for (const [angle, c] of [[0, 365e-12], [45, 250e-12], [90, 150e-12], [135, 60e-12], [180, 10e-12]] as const) {
+      const i = law.angle.findIndex((a) => Math.abs(a - angle) < 1e-9);
+      expect(i, String(angle)).toBeGreaterThanOrEqual(0);
+      expect(rel(law.frequency[i], thomson(d.inductance, network(d, c)))).toBeLessThan(1e-9);
+    }
+  });
+
+  it('a plate table that does not fall steadily is told at its field; one off the capacitor’s range gets a note', async () => {
+    const bad = await run(stateOf({}, { plates: '0: 365p; 90: 380p; 180: 10p' }));
+    expect(bad.path).toBe('plates');
+    expect(bad.message).toMatch(/steadily/);
+    expect(routeDesignError(TABLE, defaultChoices(TABLE), 'plates')).toBe('plates');
+    const off = await run(stateOf({}, { plates: '0: 500p; 180: 15p' }));
+    expect(off.plan!.notes.some((n) => n.field === 'plates' && /another band/.test(n.message))).toBe(true);
+  });
+
+  it('a plate table’s text: points by semicolon, each an angle and a capacitance, refused with the point named', () => {
+    const f = fieldByKey(TABLE, 'plates') as ValueFieldDef;
+    const ok = readFieldTextSync(f, '0 365 pF; 90°=150p\n180: 10p', {});
+    expect(ok).toEqual({ kind: 'value', value: [{ x: 0, y: 365e-12 }, { x: 90, y: 150e-12 }, { x: 180, y: 10e-12 }] });
+    const cases: [string, RegExp][] = [
+      ['0: 365p', /at least 2 points/],
+      ['0: 365p; 90: 150 µH', /Point 2 .*capacitance/i],
+      ['0: 365p; ninety: 150p', /Point 2 .*angle/],
+      ['0: 365p; 90: -5p', /Point 2 .*greater than zero/],
+      ['0: 365p; 90: 2*75p', /plain values/],
+    ];
+    for (const [text, re] of cases) {
+      const r = readFieldTextSync(f, text, {});
+      expect(r.kind, text).toBe('error');
+      expect(r.kind === 'error' && r.message, text).toMatch(re);
+    }
+  });
+
+  it('the plate table, slug and oscillator strays go through the link and back', () => {
+    const s = stateOf({}, { plates: '0: 365p; 90: 150p; 180: 10p', slug: '8', Cso: '22p' });
+    const d = decodeLink(TABLE, encodeLink(TABLE, s));
+    expect(d.notices).toEqual([]);
+    expect(d.texts).toMatchObject({ plates: '0: 365p; 90: 150p; 180: 10p', slug: '8', Cso: '22p' });
+    expect(decodeLink(TABLE, 'plates=<img src=x onerror=alert(1)>').notices[0]).toMatch(/characters no table/);
   });
 });
 
