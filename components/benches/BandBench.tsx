@@ -92,11 +92,11 @@ function BandBenchParts(outer: BenchParts<BandFormulas>) {
         <Later>
           <fieldset class="band-group">
             <legend>Band and capacitor</legend>
-            <Fields bench={bench} names={['band', 'capType', 'C', 'Cs', 'margin', 'arr']} />
+            <Fields bench={bench} names={['band', 'capType', 'C', 'Cs', 'margin', 'arr', 'slug', 'plates']} />
           </fieldset>
           <fieldset class="band-group">
             <legend>Superhet (optional)</legend>
-            <Fields bench={bench} names={['osc', 'IF']} />
+            <Fields bench={bench} names={['osc', 'IF', 'Cso']} />
           </fieldset>
         </Later>
         <fieldset class="band-group">

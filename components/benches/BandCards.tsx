@@ -8,7 +8,7 @@
  * comes near the screen, as the kit's Plot loads uPlot.
  */
 import { createMemo, createSignal, For, onCleanup, onMount, Show, type Accessor, type JSX } from 'solid-js';
-import type { SlugTuning } from '../../src/core/band';
+import type { SlugTuning } from '../../src/core/slug';
 import type { PairCandidate } from '../../src/core/pairs';
 import { formatNumber, formatQuantity, formatQuantityCompact } from '../../src/quantity';
 import type { BenchState } from '../kit/bench';
@@ -20,6 +20,7 @@ import { NoteList } from '../kit/Note';
 import { Plot } from '../kit/Plot';
 import { ResultRow } from '../kit/ResultRow';
 import type { BandFormulas, BandRun } from './BandBench';
+import { curvesOf, ownDialFor, slugFor } from './bandCurves';
 import { bandText, hz, sayQ, sayTurns } from './bandPlan';
 
 const pf = (c: number) => formatQuantityCompact(c, 'F', 3);
@@ -64,6 +65,14 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
   const d = () => p()?.design;
   const sel = () => p()?.selectivity;
   const stale = () => calc.stale();
+  // The slug and the plate table: computations of their own, so a bad entry is told at its field while the plan stands.
+  const slug = bench.compute((raw, choices) => ({ slug: slugFor(raw, choices) }));
+  const own = bench.compute((raw, choices) => ({ dial: ownDialFor(raw, choices) }));
+  const curves = () => curvesOf(p()!);
+  const notes = createMemo(() => {
+    const seen = new Set<string>();
+    return [...(p()?.notes ?? []), ...(slug.result()?.slug?.notes ?? []), ...(own.result()?.dial?.notes ?? [])].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true)));
+  });
   const linkCode = loadNear('handoff', () => import('./bandLinks'));
   const links = createMemo(() => {
     const m = linkCode.module();
@@ -111,11 +120,11 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
         </ResultRow>
       </Later>
 
-      <Show when={p()?.slug}>
-        <Later>
-          <SlugRows slug={p()!.slug!} stale={stale()} />
-        </Later>
-      </Show>
+      <Later>
+        <Show when={slug.result()?.slug}>
+          <SlugRows slug={slug.result()!.slug!} stale={slug.stale()} />
+        </Show>
+      </Later>
 
       <Later>
         <section class="tw-table-block band-block" aria-labelledby="sel-title" classList={{ 'tw-result--stale': stale() }}>
@@ -152,21 +161,21 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
       </Later>
 
       <Later>
-        <NoteList notes={p()?.notes ?? []} />
+        <NoteList notes={notes()} />
       </Later>
 
       <Later>
         <Show when={p()}>
           <Plot
             id="plot-dial"
-            caption={`Tuning curve: frequency against dial rotation, 0 % with the plates meshed. Solid: straight-line-capacitance plates; dashed: straight-line-frequency plates cut for this circuit${p()!.ownDial ? '; third: your plate table, 0 % at its first angle' : ''}. The padder crowds the meshed end of a straight-line-capacitance dial.`}
-            x={p()!.curves().dial.slc.percent}
+            caption={`Tuning curve: frequency against dial rotation, 0 % with the plates meshed. Solid: straight-line-capacitance plates; dashed: straight-line-frequency plates cut for this circuit${own.result()?.dial ? '; third: your plate table, 0 % at its first angle' : ''}. The padder crowds the meshed end of a straight-line-capacitance dial.`}
+            x={curves().dial.slc.percent}
             xLabel="Rotation"
             formatX={tickPercent}
             series={[
-              { label: 'SLC', values: p()!.curves().dial.slc.frequency, unit: 'Hz' },
-              { label: 'SLF', values: p()!.curves().dial.slf.frequency, unit: 'Hz', dash: true },
-              ...(p()!.ownDial ? [{ label: 'Your plates', values: p()!.ownDial!.frequency, unit: 'Hz' }] : []),
+              { label: 'SLC', values: curves().dial.slc.frequency, unit: 'Hz' },
+              { label: 'SLF', values: curves().dial.slf.frequency, unit: 'Hz', dash: true },
+              ...(own.result()?.dial ? [{ label: 'Your plates', values: own.result()!.dial!.frequency, unit: 'Hz' }] : []),
             ]}
             yLabel="Frequency"
             formatY={tickHz}
@@ -177,13 +186,13 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
           <Plot
             id="plot-selectivity"
             caption="Selectivity across the band: loaded Q (solid) and unloaded Q (dashed) on the left, the −3 dB bandwidth on the right."
-            x={p()!.curves().selectivity.frequency}
+            x={curves().selectivity.frequency}
             xLabel="Frequency"
             formatX={tickHz}
             series={[
-              { label: 'Loaded Q', values: p()!.curves().selectivity.loadedQ, format: sayQ },
-              { label: 'Unloaded Q', values: p()!.curves().selectivity.unloadedQ, dash: true, format: sayQ },
-              { label: 'Bandwidth', values: p()!.curves().selectivity.bandwidth.map((b) => b / 1e3), unit: 'kHz', axis: 'right' },
+              { label: 'Loaded Q', values: curves().selectivity.loadedQ, format: sayQ },
+              { label: 'Unloaded Q', values: curves().selectivity.unloadedQ, dash: true, format: sayQ },
+              { label: 'Bandwidth', values: curves().selectivity.bandwidth.map((b) => b / 1e3), unit: 'kHz', axis: 'right' },
             ]}
             yLabel="Q"
             y2Label="Bandwidth (kHz)"
@@ -193,10 +202,10 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
             <Plot
               id="plot-image"
               caption="Image rejection of the signal tank across the band, dB below its response on tune."
-              x={p()!.curves().selectivity.frequency}
+              x={curves().selectivity.frequency}
               xLabel="Frequency"
               formatX={tickHz}
-              series={[{ label: 'Image rejection', values: p()!.curves().image ?? [], unit: 'dB', format: sayDb }]}
+              series={[{ label: 'Image rejection', values: curves().image ?? [], unit: 'dB', format: sayDb }]}
               yLabel="Rejection (dB)"
               stale={stale()}
             />

@@ -7,11 +7,12 @@
  *     mid-band, its Q across the band, the tank's unloaded and loaded Q,
  *     bandwidth and dynamic resistance at each frequency)
  *   → the image rejection of the signal tank (the core's imageRejection) for a superhet
- *   → dialLaw (frequency against rotation, straight-line capacitance and
- *     straight-line frequency plates), with the selectivity and image curves
- *     worked out only when a plot first asks (`curves`): each point of the
- *     selectivity is a tank analysis, and a phone should not pay for a plot
- *     nobody scrolls to
+ *
+ * What the plots draw (the dial laws, the selectivity and image curves) and
+ * the optional parts (a tuning slug, the user's plate table) are in
+ * bandCurves.ts, which only the cards' chunk loads: each point of the
+ * selectivity is a tank analysis, and a phone should not pay for a plot
+ * nobody scrolls to.
  *
  * The parts the bench shows further down live in modules of their own, which
  * the bench loads when their section comes near the screen (so the page's
@@ -24,10 +25,10 @@
  * core's own names, `coil.…` for the coil (bandSelectivity's prefix, and
  * the spec builder's errors are given it here too).
  */
-import { dialLaw, designForBand, bandSelectivity, slugTuning, type BandDesign, type BandSelectivity, type DialLaw, type PlatePoint, type SlugTuning } from '../../src/core/band';
+import { designForBand, bandSelectivity, type BandDesign, type BandSelectivity } from '../../src/core/band';
 import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
 import { DesignError, isDesignError, withinSpec } from '../../src/core/errors';
-import { note, type DesignNote } from '../../src/core/notes';
+import type { DesignNote } from '../../src/core/notes';
 import type { TankInput } from '../../src/core/tankModel';
 import { imageRejection, type OscillatorSide } from '../../src/core/image';
 import { formatQuantityCompact, parseQuantityRange } from '../../src/quantity';
@@ -35,10 +36,6 @@ import { getPath, type Choices, type SpecObject } from '../kit/fields';
 import { capacitorKindRange, COIL_PREFIX } from './bandFields';
 import { buildCoilSpec } from './coilFields';
 
-/** Points of the dial law curves. */
-export const DIAL_POINTS = 61;
-/** Points of the selectivity and image curves across the band. */
-export const SELECTIVITY_POINTS = 21;
 /** A number at a path of the raw values, or undefined. */
 export function num(raw: unknown, path: string): number | undefined {
   const v = getPath(raw, path);
@@ -73,13 +70,13 @@ export function bandCoilSpec(raw: SpecObject, choices: Choices): DesignCoilSpec 
 }
 
 /** The superhet's IF and oscillator side, when the bench has one. */
-interface Superhet {
+export interface Superhet {
   intermediateFrequency: number;
   oscillatorSide: OscillatorSide;
 }
 
 /** The core's image rejection of the tank tuned to f (its own loss figures at f): the image and how far below f's response, dB. */
-function imageAt(tank: TankInput, f: number, superhet: Superhet): { image: number; rejection: number } {
+export function imageAt(tank: TankInput, f: number, superhet: Superhet): { image: number; rejection: number } {
   const r = imageRejection({ tank, signalFrequency: f, ...superhet });
   return { image: r.imageFrequency, rejection: r.rejection };
 }
@@ -91,32 +88,20 @@ export interface ImageResponse {
   high: { image: number; rejection: number };
 }
 
-/** The curves the plots draw: worked out when a plot first asks (each point of the selectivity is a tank analysis). */
-export interface BandCurves {
-  /** Frequency against rotation for straight-line-capacitance and straight-line-frequency plates (the user's own: `ownDial` of the plan). */
-  dial: { slc: DialLaw; slf: DialLaw };
-  /** Selectivity at SELECTIVITY_POINTS frequencies across the band. */
-  selectivity: BandSelectivity['curve'];
-  /** Image rejection, dB, at the same frequencies (superhet only). */
-  image?: number[];
-}
-
 export interface BandPlan {
   design: BandDesign;
   /** The coil as designCoil winds it for the band's L at mid-band. */
   coil: DesignCoilResult;
   /** The spec it was wound from (with L and the mid-band frequency). */
   coilSpec: DesignCoilSpec;
-  /** Selectivity at the band's low, middle and high frequency (its curve: see `curves`). */
+  /** Selectivity at the band's low, middle and high frequency (its curve: `selectivityAt`). */
   selectivity: BandSelectivity;
   /** Superhet only: the signal tank's response at the image. */
   image?: ImageResponse;
-  /** With a tuning slug: the band at both ends of its travel and its setting for the band asked. */
-  slug?: SlugTuning;
-  /** The user's plates in this circuit (worked out with the plan, so a bad table is told at its field at once). */
-  ownDial?: DialLaw;
-  /** The plotted curves, worked out on first call and kept. */
-  curves: () => BandCurves;
+  /** The selectivity at this many points across the band (the plotted curve; a tank analysis per point). */
+  selectivityAt: (points: number) => BandSelectivity;
+  /** The superhet's IF and oscillator side, when the bench has one. */
+  superhet?: Superhet;
   /** Every note of the plan, without repeats. */
   notes: DesignNote[];
 }
@@ -148,63 +133,11 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
   const superhet: Superhet | undefined = side === undefined || ifreq === undefined ? undefined : { intermediateFrequency: ifreq, oscillatorSide: side };
   const point = (p: BandSelectivity['low'], sh: Superhet) => imageAt(p.tank, p.frequency, sh);
   const image = superhet && { low: point(selectivity.low, superhet), middle: point(selectivity.middle, superhet), high: point(selectivity.high, superhet) };
-  const slug = slugFor(raw, design);
-  const ownDial = ownDialLaw(raw, design);
-  let curves: BandCurves | undefined;
   const seen = new Set<string>();
   return {
-    design, coil, coilSpec, selectivity, image, slug, ownDial,
-    curves: () => (curves ??= bandCurves(design, selectivityAt(SELECTIVITY_POINTS), superhet)),
-    notes: [...design.notes, ...selectivity.notes, ...(slug?.notes ?? []), ...(ownDial?.notes ?? [])].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
+    design, coil, coilSpec, selectivity, image, selectivityAt, superhet,
+    notes: [...design.notes, ...selectivity.notes].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
   };
-}
-
-/** The designed circuit's coil and capacitor network, as dialLaw and slugTuning take it. */
-function circuitOf(design: BandDesign) {
-  return {
-    inductance: design.inductance,
-    strayCapacitance: design.strayCapacitance,
-    trimmerCapacitance: design.trimmerCapacitance,
-    padderCapacitance: design.padderCapacitance,
-    minCapacitance: design.minCapacitance,
-    maxCapacitance: design.maxCapacitance,
-  };
-}
-
-/** Slug tuning of the designed coil, ±the percentage typed, over the band asked; undefined without a slug. */
-function slugFor(raw: SpecObject, design: BandDesign): SlugTuning | undefined {
-  const percent = num(raw, 'slugAdjustmentPercent');
-  if (percent === undefined) return undefined;
-  const { inductance, ...network } = circuitOf(design);
-  return slugTuning({ ...network, inductance, adjustment: percent / 100, lowFrequency: design.requestedLowFrequency, highFrequency: design.requestedHighFrequency });
-}
-
-/** The dial law of the user's plate table in the designed circuit; undefined without one. */
-function ownDialLaw(raw: SpecObject, design: BandDesign): DialLaw | undefined {
-  const table = getPath(raw, 'plates');
-  if (!Array.isArray(table)) return undefined;
-  const plates: PlatePoint[] = table.map((p: { x: number; y: number }) => ({ angle: p.x, capacitance: p.y }));
-  const law = dialLaw({ ...circuitOf(design), plates, points: DIAL_POINTS });
-  const ends = [plates[0].capacitance, plates[plates.length - 1].capacitance];
-  const [lo, hi] = [Math.min(...ends), Math.max(...ends)];
-  const off = Math.max(Math.abs(lo / design.minCapacitance - 1), Math.abs(hi / design.maxCapacitance - 1));
-  if (off > 0.05) {
-    law.notes.push(note('info', `Your plate table runs ${formatQuantityCompact(lo, 'F', 3)} to ${formatQuantityCompact(hi, 'F', 3)}, not the ${formatQuantityCompact(design.minCapacitance, 'F', 3)} to ${formatQuantityCompact(design.maxCapacitance, 'F', 3)} the band was designed with: its tuning curve covers another band. Give the capacitor's range from the same measurement.`, 'plates'));
-  }
-  return law;
-}
-
-/** The dial laws, the selectivity curve and the image rejection along it. */
-function bandCurves(design: BandDesign, selectivity: BandSelectivity, superhet: Superhet | undefined): BandCurves {
-  const circuit = { ...circuitOf(design), points: DIAL_POINTS };
-  const template = selectivity.middle.tank;
-  const w = (f: number) => 2 * Math.PI * f;
-  const image = superhet && selectivity.curve.frequency.map((f, i) => {
-    // The tank tuned to f, as bandSelectivity builds it: the network that resonates L at f, the coil's Q there.
-    const tank = { ...template, capacitance: 1 / (w(f) * w(f) * design.inductance) - design.strayCapacitance, coilQ: selectivity.curve.coilQ[i], frequency: f };
-    return imageAt(tank, f, superhet).rejection;
-  });
-  return { dial: { slc: dialLaw({ ...circuit, plates: 'slc' }), slf: dialLaw({ ...circuit, plates: 'slf' }) }, selectivity: selectivity.curve, image };
 }
 
 /** The oscillator's side for a superhet, or undefined for none. */

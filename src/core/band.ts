@@ -1,8 +1,9 @@
 /**
  * Band coverage: what band a coil and a variable capacitor tune, and the coil,
- * trimmer and padder that make a given capacitor tune a given band; tuning by
- * a slug in the coil; the dial law (frequency against rotation); and the
- * selectivity across the band.
+ * trimmer and padder that make a given capacitor tune a given band; and the
+ * selectivity across the band. Tuning by a slug in the coil is in slug.ts,
+ * the dial law (frequency against rotation) in dial.ts; both use the network
+ * defined here.
  *
  * The circuit (lumped, lossless for the band algebra):
  *
@@ -45,8 +46,8 @@
  * and superheterodyne tracking; section numbers from memory, not checked);
  * the algebra here is our own derivation from the circuit above. The
  * parallel-capacitance limit for switching to a padder is our own choice
- * (common practice, no published source). Monotone interpolation of a plate
- * table: Fritsch and Carlson, "Monotone piecewise cubic interpolation", SIAM
+ * (common practice, no published source). Monotone interpolation (the coil's
+ * Q between its nodes across the band, and a plate table in dial.ts): Fritsch and Carlson, "Monotone piecewise cubic interpolation", SIAM
  * J. Numer. Anal. 17 (1980) 238–246, with the derivative of Fritsch and
  * Butland, SIAM J. Sci. Stat. Comput. 5 (1984) 300–304.
  *
@@ -83,7 +84,7 @@ const NARROWEST_BAND = 1e-6;
 const COIL_Q_NODES = 9;
 
 /** Relative tolerance for the limit case where the capacitor's ratio just covers the band. */
-const LIMIT_TOLERANCE = 1e-12;
+export const LIMIT_TOLERANCE = 1e-12;
 
 // ---------------------------------------------------------------------------
 // The circuit
@@ -138,7 +139,7 @@ function zeroOrMore(field: string, value: unknown, what: string): number {
   return tankValue(field, value, what, 'F');
 }
 
-function checkNetwork(c: Partial<BandCircuit>): Network {
+export function checkNetwork(c: Partial<BandCircuit>): Network {
   const min = tankValue('minCapacitance', c.minCapacitance, 'The capacitor\'s minimum capacitance', 'F');
   const max = tankValue('maxCapacitance', c.maxCapacitance, 'The capacitor\'s maximum capacitance', 'F');
   if (!(max > min)) {
@@ -177,7 +178,7 @@ export function partnerAt(x: number, f: number): number {
   return 1 / w / (w * x);
 }
 
-function coverageOf(n: Network, l: number): BandCoverage {
+export function coverageOf(n: Network, l: number): BandCoverage {
   const lowEndCapacitance = totalCapacitance(n, n.max);
   const highEndCapacitance = totalCapacitance(n, n.min);
   const lowFrequency = requireFiniteFigure('inductance', thomson(l, lowEndCapacitance), 'The band\'s low end');
@@ -186,14 +187,14 @@ function coverageOf(n: Network, l: number): BandCoverage {
 }
 
 /** The band must have width to be swept (a padder far smaller than the capacitor leaves none). */
-function requireWidth(cover: BandCoverage): void {
+export function requireWidth(cover: BandCoverage): void {
   if (!(cover.highFrequency > cover.lowFrequency * (1 + 1e-12))) {
     throw new DesignError('padderCapacitance', `The circuit hardly tunes at all (${sayQuantity(cover.lowFrequency, 'Hz', 6)} to ${sayQuantity(cover.highFrequency, 'Hz', 6)}): the padder or the strays swamp the variable capacitor.`);
   }
 }
 
 /** A figure that must be finite and above zero. */
-function requireFiniteFigure(field: string, value: number, what: string): number {
+export function requireFiniteFigure(field: string, value: number, what: string): number {
   if (!(Number.isFinite(value) && value > 0)) {
     throw new DesignError(field, `${what} is beyond what can be computed with these values: they are far outside anything that can be built.`);
   }
@@ -271,7 +272,7 @@ function frequencyValue(field: string, value: unknown, what: string): number {
 }
 
 /** The band's ends, checked: low below high, and a band rather than a spot frequency. */
-function checkBand(low: unknown, high: unknown): { low: number; high: number } {
+export function checkBand(low: unknown, high: unknown): { low: number; high: number } {
   const f1 = frequencyValue('lowFrequency', low, 'The band\'s low end');
   const f2 = frequencyValue('highFrequency', high, 'The band\'s high end');
   if (!(f2 > f1)) {
@@ -401,231 +402,13 @@ export function designForBand(input: BandDesignInput): BandDesign {
   };
 }
 
-// ---------------------------------------------------------------------------
-// Slug (permeability) tuning
-
-/** What `slugTuning` takes: the capacitor network and the coil's inductance range (min/max, or inductance ± adjustment). */
-export interface SlugTuningInput {
-  minCapacitance: number;
-  maxCapacitance: number;
-  strayCapacitance: number;
-  trimmerCapacitance?: number;
-  padderCapacitance?: number;
-  /** Coil with the slug fully out, H (with maxInductance). */
-  minInductance?: number;
-  /** Coil with the slug fully in, H (with minInductance). */
-  maxInductance?: number;
-  /** Coil's nominal inductance, H (with adjustment, instead of min/max). */
-  inductance?: number;
-  /** Slug range as a fraction either way: L (1 − a) … L (1 + a), 0 < a < 1. */
-  adjustment?: number;
-  /** A band to set with the slug (both ends or neither), Hz. */
-  lowFrequency?: number;
-  highFrequency?: number;
-}
-
-/** The slug's setting for a band, from `slugTuning`. */
-export interface SlugSetting {
-  /** Inductance that puts the capacitor's low end exactly on the band's low end, H (the smallest that still covers). */
-  inductanceForLowEnd: number;
-  /** Inductance that puts the capacitor's high end exactly on the band's high end, H (the largest that still covers). */
-  inductanceForHighEnd: number;
-  /** Inductance to set: the window's geometric middle (equal spare at both ends), clamped to the slug's range, H. */
-  inductance: number;
-  /** Spare at each end at that inductance, as a fraction of frequency (0 = exact). */
-  spare: number;
-  /** Band covered at that inductance, Hz. */
-  lowFrequency: number;
-  highFrequency: number;
-  /** True when the slug reaches an inductance that covers the band. */
-  withinSlugRange: boolean;
-}
-
-/** What `slugTuning` returns. */
-export interface SlugTuning {
-  minInductance: number;
-  maxInductance: number;
-  /** Frequency ratio the slug alone gives at any one capacitor setting, √(L_max/L_min). */
-  slugFrequencyRatio: number;
-  /** Frequency ratio the capacitor gives at any one slug setting. */
-  capacitorRatio: number;
-  /** Band with the slug fully in (largest L) and fully out (smallest L), Hz. */
-  slugIn: BandCoverage;
-  slugOut: BandCoverage;
-  /** Lowest and highest frequency reachable with slug and capacitor, Hz. */
-  lowestFrequency: number;
-  highestFrequency: number;
-  /** The slug's setting for the band given (when one was). */
-  setting?: SlugSetting;
-  notes: DesignNote[];
-}
-
-function inductanceRange(input: SlugTuningInput): { lo: number; hi: number } {
-  const hasRange = input.minInductance !== undefined || input.maxInductance !== undefined;
-  const hasNominal = input.inductance !== undefined || input.adjustment !== undefined;
-  if (hasRange && hasNominal) {
-    throw new DesignError('inductance', 'Give the slug\'s range either as minimum and maximum inductance, or as an inductance and an adjustment, not both.');
-  }
-  if (hasNominal) {
-    const l = tankValue('inductance', input.inductance, 'Inductance', 'H');
-    const a = requireFinite('adjustment', input.adjustment, 'The slug\'s adjustment');
-    if (!(a > 0 && a < 1)) throw new DesignError('adjustment', `The slug's adjustment is a fraction either way, above 0 and below 1 (0.1 for ±10 %); got ${sayNumber(a)}.`);
-    return { lo: l * (1 - a), hi: l * (1 + a) };
-  }
-  const lo = tankValue('minInductance', input.minInductance, 'The coil\'s minimum inductance (slug out)', 'H');
-  const hi = tankValue('maxInductance', input.maxInductance, 'The coil\'s maximum inductance (slug in)', 'H');
-  if (!(hi > lo)) throw new DesignError('maxInductance', `The coil's maximum inductance ${sayQuantity(hi, 'H')} must be above its minimum ${sayQuantity(lo, 'H')}.`);
-  return { lo, hi };
-}
-
-/**
- * Permeability (slug) tuning: a coil whose inductance a slug adjusts over
- * L_min … L_max, with the capacitor network of `bandCoverage`. The slug scales
- * every frequency by √(L/L'): it moves the band without changing its ratio,
- * which the capacitor network alone sets. Returns the band at both slug ends,
- * everything reachable, and, for a band given, the inductance window that
- * covers it, L from 1/((2π f_low)² C(C_max)) to 1/((2π f_high)² C(C_min)),
- * and the setting in the window's geometric middle. Lumped and lossless.
- * @param input capacitances in F, inductances in H, band in Hz
- * @throws DesignError naming the input at fault; `highFrequency` when the capacitor's ratio cannot cover the band
- */
-export function slugTuning(input: SlugTuningInput): SlugTuning {
-  requireObject<SlugTuningInput>('slug', input, 'The slug tuning');
-  const n = checkNetwork(input);
-  const { lo, hi } = inductanceRange(input);
-  const slugIn = coverageOf(n, hi);
-  const slugOut = coverageOf(n, lo);
-  const capacitorRatio = slugIn.frequencyRatio;
-  const notes: DesignNote[] = [];
-  const result: SlugTuning = {
-    minInductance: lo,
-    maxInductance: hi,
-    slugFrequencyRatio: Math.sqrt(hi / lo),
-    capacitorRatio,
-    slugIn,
-    slugOut,
-    lowestFrequency: slugIn.lowFrequency,
-    highestFrequency: slugOut.highFrequency,
-    notes,
-  };
-  if (input.lowFrequency === undefined && input.highFrequency === undefined) return result;
-  const band = checkBand(input.lowFrequency, input.highFrequency);
-  const lForLow = partnerAt(slugIn.lowEndCapacitance, band.low);
-  const lForHigh = partnerAt(slugIn.highEndCapacitance, band.high);
-  const needed = band.high / band.low;
-  if (lForLow > lForHigh * (1 + LIMIT_TOLERANCE)) {
-    throw new DesignError('highFrequency', `The band ${sayQuantity(band.low, 'Hz', 4)} to ${sayQuantity(band.high, 'Hz', 4)} needs a frequency ratio of ${sayNumber(needed, 4)}, but the capacitor${n.trimmer > 0 || n.padder !== undefined ? ' with its trimmer and padder' : ''} gives ${sayNumber(capacitorRatio, 4)}: a slug moves the band but cannot widen it. Use less trimmer or padder, a larger capacitor, fewer strays, or split the band.`);
-  }
-  const middle = Math.sqrt(lForLow * lForHigh);
-  const inductance = Math.min(Math.max(middle, lo, lForLow), hi, lForHigh);
-  const within = lo <= lForHigh && hi >= lForLow;
-  const at = coverageOf(n, within ? inductance : middle);
-  const spare = Math.min(band.low / at.lowFrequency, at.highFrequency / band.high) - 1;
-  result.setting = {
-    inductanceForLowEnd: lForLow,
-    inductanceForHighEnd: lForHigh,
-    inductance: within ? inductance : middle,
-    spare: Math.max(0, spare),
-    lowFrequency: at.lowFrequency,
-    highFrequency: at.highFrequency,
-    withinSlugRange: within,
-  };
-  if (!within) {
-    const short = lForLow > hi ? `it needs at least ${sayQuantity(lForLow, 'H', 4)}, but the slug fully in gives ${sayQuantity(hi, 'H', 4)}: add turns` : `it needs at most ${sayQuantity(lForHigh, 'H', 4)}, but the slug fully out gives ${sayQuantity(lo, 'H', 4)}: take off turns`;
-    notes.push(note('caution', `The slug cannot set this band: ${short}.`, lForLow > hi ? 'maxInductance' : 'minInductance'));
-  }
-  notes.push(note('info', 'A slug moves both ends of the band together; the capacitor network sets the band\'s width. The usual alignment sets the low end with the slug and the high end with the trimmer (common practice, no published source).'));
-  return result;
-}
-
-// ---------------------------------------------------------------------------
-// Dial law
-
-/** One point of a capacitor's measured plate table. */
-export interface PlatePoint {
-  /** Rotation, degrees. */
-  angle: number;
-  /** The variable capacitor's capacitance at that rotation, F. */
-  capacitance: number;
-}
-
-/** What `dialLaw` takes. */
-export interface DialLawInput {
-  inductance: number;
-  strayCapacitance: number;
-  trimmerCapacitance?: number;
-  padderCapacitance?: number;
-  /**
-   * 'slc': straight-line capacitance (C linear in angle); 'slf': straight-line
-   * frequency (plates shaped so f is linear in angle, in this circuit); or the
-   * user's own plates as a table of C at a few angles (angles rising).
-   */
-  plates: 'slc' | 'slf' | PlatePoint[];
-  /** Variable capacitor's range, F (for 'slc' and 'slf'; a table gives its own). */
-  minCapacitance?: number;
-  maxCapacitance?: number;
-  /** Full rotation, degrees (default 180; 'slc' and 'slf'). */
-  rotation?: number;
-  /** Points of the curves (default 181, 2 … 10,000). */
-  points?: number;
-}
-
-/** What `dialLaw` returns: equal-length arrays ready to plot. */
-export interface DialLaw {
-  plates: 'slc' | 'slf' | 'table';
-  /** Rotation, degrees: 0 = plates meshed for 'slc' and 'slf'; as the table gives otherwise. */
-  angle: number[];
-  /** Rotation as 0 … 100 % of the span. */
-  percent: number[];
-  /** The variable capacitor's capacitance, F. */
-  capacitance: number[];
-  /** Total capacitance across the coil, F. */
-  totalCapacitance: number[];
-  /** Tuned frequency, Hz. */
-  frequency: number[];
-  notes: DesignNote[];
-}
-
-function checkPoints(value: unknown, fallback: number): number {
-  if (value === undefined) return fallback;
-  if (typeof value !== 'number' || !Number.isInteger(value) || value < 2 || value > 10_000) {
-    throw new DesignError('points', `Number of points must be a whole number from 2 to 10,000 (got ${typeof value === 'number' ? sayNumber(value) : typeof value}).`);
-  }
-  return value;
-}
-
-/** The plate table checked: angles rising, capacitance strictly rising or strictly falling. */
-function checkTable(table: unknown[]): PlatePoint[] {
-  if (table.length < 2) throw new DesignError('plates', 'A plate table needs at least two points (angle and capacitance).');
-  if (table.length > 10_000) throw new DesignError('plates', 'A plate table of more than 10,000 points is more than a dial needs.');
-  const out: PlatePoint[] = table.map((row, i) => {
-    const r = requireObject<PlatePoint>('plates', row, `Point ${i + 1} of the plate table`);
-    const angle = requireInRange('plates', requireFinite('plates', r.angle, `The angle of point ${i + 1}`), -3600, 3600, `The angle of point ${i + 1}`);
-    const capacitance = tankValue('plates', r.capacitance, `The capacitance of point ${i + 1}`, 'F');
-    return { angle, capacitance };
-  });
-  for (let i = 1; i < out.length; i++) {
-    if (!(out[i].angle > out[i - 1].angle)) {
-      throw new DesignError('plates', `The plate table's angles must rise from point to point: point ${i + 1} (${sayNumber(out[i].angle)}°) is not beyond point ${i} (${sayNumber(out[i - 1].angle)}°).`);
-    }
-  }
-  const rising = out[1].capacitance > out[0].capacitance;
-  for (let i = 1; i < out.length; i++) {
-    const step = out[i].capacitance - out[i - 1].capacitance;
-    if (rising ? !(step > 0) : !(step < 0)) {
-      throw new DesignError('plates', `The plate table's capacitance must ${rising ? 'rise' : 'fall'} steadily with angle, but at ${sayNumber(out[i].angle)}° it is ${sayQuantity(out[i].capacitance, 'F')}, ${step === 0 ? 'the same as' : rising ? 'less than' : 'more than'} ${sayQuantity(out[i - 1].capacitance, 'F')} at ${sayNumber(out[i - 1].angle)}°: check the table for a misread.`);
-    }
-  }
-  return out;
-}
-
 /**
  * Monotone cubic (Fritsch–Carlson) interpolant through strictly monotonic
  * points: derivatives by Fritsch and Butland's weighted harmonic mean inside,
  * one-sided slopes at the ends; cubic Hermite pieces between. Never overshoots
  * the table, so a monotonic table gives a monotonic curve.
  */
-function monotoneInterpolator(xs: readonly number[], ys: readonly number[]): (x: number) => number {
+export function monotoneInterpolator(xs: readonly number[], ys: readonly number[]): (x: number) => number {
   const n = xs.length;
   const h: number[] = [];
   const d: number[] = [];
@@ -653,69 +436,13 @@ function monotoneInterpolator(xs: readonly number[], ys: readonly number[]): (x:
   };
 }
 
-/**
- * Frequency against rotation. 'slc': C_v = C_max − (C_max − C_min) θ/Θ
- * (θ = 0 plates meshed). 'slf': f rises linearly from the low to the high end
- * of this circuit's band, f(θ) = f_low + (f_high − f_low) θ/Θ, and C_v is
- * the setting that gives it (the ideal SLF shape for this circuit; real SLF
- * plates are cut for one total capacitance). Table: C_v from the user's
- * points by monotone cubic interpolation (Fritsch and Carlson 1980), over the
- * table's span. The frequency at each point is Thomson's, with the network of
- * `bandCoverage`.
- * @param input L in H, capacitances in F, rotation in degrees
- * @throws DesignError naming the input at fault ('plates' for a bad table)
- */
-export function dialLaw(input: DialLawInput): DialLaw {
-  requireObject<DialLawInput>('dial', input, 'The dial law');
-  const l = tankValue('inductance', input.inductance, 'Inductance', 'H');
-  const plates = input.plates;
-  const table = Array.isArray(plates) ? checkTable(plates) : undefined;
-  if (!table && plates !== 'slc' && plates !== 'slf') {
-    throw new DesignError('plates', `The plates must be "slc" (straight-line capacitance), "slf" (straight-line frequency) or a table of angle and capacitance (got ${typeof plates === 'string' ? JSON.stringify(plates) : typeof plates}).`);
+/** Points of a curve: a whole number from 2 to 10,000, or the fallback. */
+export function checkPoints(value: unknown, fallback: number): number {
+  if (value === undefined) return fallback;
+  if (typeof value !== 'number' || !Number.isInteger(value) || value < 2 || value > 10_000) {
+    throw new DesignError('points', `Number of points must be a whole number from 2 to 10,000 (got ${typeof value === 'number' ? sayNumber(value) : typeof value}).`);
   }
-  const points = checkPoints(input.points, 181);
-  const ends = table
-    ? { minCapacitance: Math.min(table[0].capacitance, table[table.length - 1].capacitance), maxCapacitance: Math.max(table[0].capacitance, table[table.length - 1].capacitance) }
-    : { minCapacitance: input.minCapacitance, maxCapacitance: input.maxCapacitance };
-  const n = checkNetwork({ ...input, ...ends });
-  const rotation = table ? table[table.length - 1].angle - table[0].angle : input.rotation === undefined ? 180 : requireInRange('rotation', requireFinite('rotation', input.rotation, 'Rotation'), 1, 3600, 'Rotation');
-  const start = table ? table[0].angle : 0;
-  const angle: number[] = [];
-  const percent: number[] = [];
-  const capacitance: number[] = [];
-  const totalC: number[] = [];
-  const frequency: number[] = [];
-  const notes: DesignNote[] = [];
-  const fraction = (i: number) => i / (points - 1);
-  if (plates === 'slf') {
-    const cover = coverageOf(n, l);
-    requireWidth(cover);
-    const grid = frequencyGrid({ start: cover.lowFrequency, stop: cover.highFrequency, points, spacing: 'linear' });
-    for (let i = 0; i < points; i++) {
-      const f = grid[i];
-      const total = i === 0 ? cover.lowEndCapacitance : i === points - 1 ? cover.highEndCapacitance : partnerAt(l, f);
-      frequency.push(f);
-      totalC.push(total);
-      capacitance.push(i === 0 ? n.max : i === points - 1 ? n.min : Math.min(n.max, Math.max(n.min, variableFor(n, total))));
-    }
-    notes.push(note('info', 'Straight-line-frequency plates are cut for one circuit: the law shown is the ideal for this coil, strays, trimmer and padder. A capacitor cut for another circuit follows it only roughly.'));
-  } else {
-    const interpolate = table ? monotoneInterpolator(table.map((p) => p.angle), table.map((p) => p.capacitance)) : undefined;
-    for (let i = 0; i < points; i++) {
-      const cv = interpolate
-        ? (i === 0 ? table![0].capacitance : i === points - 1 ? table![table!.length - 1].capacitance : interpolate(start + rotation * fraction(i)))
-        : n.max - (n.max - n.min) * fraction(i);
-      const total = totalCapacitance(n, cv);
-      capacitance.push(cv);
-      totalC.push(total);
-      frequency.push(requireFiniteFigure('inductance', thomson(l, total), 'The tuned frequency'));
-    }
-  }
-  for (let i = 0; i < points; i++) {
-    angle.push(start + rotation * fraction(i));
-    percent.push(100 * fraction(i));
-  }
-  return { plates: table ? 'table' : plates as 'slc' | 'slf', angle, percent, capacitance, totalCapacitance: totalC, frequency, notes };
+  return value;
 }
 
 // ---------------------------------------------------------------------------

@@ -25,10 +25,10 @@
  * `analyzeTank` say so). One tuned circuit: stages in cascade add their
  * rejections in dB.
  */
+import { TWO_PI } from './constants';
 import { DesignError, requireObject } from './errors';
-import { analyzeTank } from './tank';
-import { tankValue, type TankInput } from './tankModel';
-import { sweepTank } from './tankSweep';
+import { evaluate, kernelOf, scratch } from './tankKernel';
+import { qFigures, resolveTank, TANK_VALUE_RANGE, tankValue, type ResolvedTank, type TankInput } from './tankModel';
 import { sayQuantity } from './text';
 
 /** Which side of the signal the local oscillator runs. */
@@ -53,7 +53,7 @@ export interface ImageRejection {
   rejection: number;
   /** The universal-resonance estimate 20 log₁₀ √(1 + Q_L²ξ²), dB. */
   estimate: number;
-  /** Loaded Q of the tank (from `analyzeTank`). */
+  /** Loaded Q of the tank (as `analyzeTank` gives it). */
   loadedQ: number;
 }
 
@@ -89,22 +89,25 @@ export function imageRejection(input: ImageRejectionInput): ImageRejection {
   requireObject('tank', tank, 'The tank');
   const fi = imageFrequency(signalFrequency, intermediateFrequency, oscillatorSide);
   const fs = signalFrequency;
+  if (fi > TANK_VALUE_RANGE.max) throw new DesignError('intermediateFrequency', `The image at ${sayQuantity(fi, 'Hz')} is outside the range a tank can be computed over.`);
   // The tank's loss figures refer to the signal frequency unless the tank says otherwise.
-  const tuned: TankInput = { ...tank, frequency: tank.frequency ?? fs };
-  let response: Float64Array;
-  let loadedQ: number;
+  let t: ResolvedTank;
   try {
-    response = sweepTank(tuned, { start: Math.min(fs, fi), stop: Math.max(fs, fi), points: 2, spacing: 'linear' }).response;
-    loadedQ = analyzeTank(tuned).loadedQ;
+    t = resolveTank({ ...tank, frequency: tank.frequency ?? fs });
   } catch (e) {
-    if (e instanceof DesignError && ['start', 'stop'].includes(e.field)) {
-      throw new DesignError('intermediateFrequency', `The image at ${sayQuantity(fi, 'Hz')} is outside the range a tank can be computed over.`);
-    }
     if (e instanceof DesignError) throw new DesignError(`tank.${e.field}`, e.message);
     throw e;
   }
-  const [atSignal, atImage] = fs < fi ? [response[0], response[1]] : [response[1], response[0]];
+  // The terminated response is proportional to 1/√(the kernel's objective) at each frequency (see sweepTank).
+  const k = kernelOf(t);
+  const objective = (f: number) => {
+    const w = TWO_PI * f;
+    evaluate(k, w, w / k.w0 - 1, scratch);
+    return scratch[2];
+  };
+  const rejection = 10 * Math.log10(objective(fi) / objective(fs));
+  const loadedQ = qFigures(t).loadedQ;
   const xi = fi / fs - fs / fi;
   const estimate = Number.isFinite(loadedQ) ? 10 * Math.log10(1 + (loadedQ * xi) ** 2) : Infinity;
-  return { signalFrequency: fs, imageFrequency: fi, rejection: atSignal - atImage, estimate, loadedQ };
+  return { signalFrequency: fs, imageFrequency: fi, rejection, estimate, loadedQ };
 }

@@ -18,11 +18,12 @@ export {
 export { E_SERIES, E_SERIES_NAMES, eSeries, nearestPreferredValue, preferredNeighbours, requireSeries, seriesValuesBetween } from './preferred';
 export type { ESeriesName, PreferredNeighbours } from './preferred';
 export { resonantPairs, toleranceSpread } from './pairs';
-export { bandCoverage, designForBand, slugTuning, dialLaw, bandSelectivity, PADDER_SWITCH_RATIO } from './band';
-export type {
-  BandCircuit, BandCoverage, BandDesignInput, BandDesign, SlugTuningInput, SlugSetting, SlugTuning, PlatePoint, DialLawInput, DialLaw,
-  BandSelectivityInput, SelectivityPoint, BandSelectivity,
-} from './band';
+export { bandCoverage, designForBand, bandSelectivity, PADDER_SWITCH_RATIO } from './band';
+export type { BandCircuit, BandCoverage, BandDesignInput, BandDesign, BandSelectivityInput, SelectivityPoint, BandSelectivity } from './band';
+export { slugTuning } from './slug';
+export type { SlugTuningInput, SlugSetting, SlugTuning } from './slug';
+export { dialLaw } from './dial';
+export type { PlatePoint, DialLawInput, DialLaw } from './dial';
 export { imageFrequency, imageRejection } from './image';
 export type { OscillatorSide, ImageRejectionInput, ImageRejection } from './image';
 export { trackingPoints, designTracking, trackingError } from './tracking';

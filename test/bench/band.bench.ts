@@ -7,7 +7,9 @@
  * vitest bench reports the mean in ms; multiply by 1,000 for µs.
  */
 import { bench, describe } from 'vitest';
-import { bandCoverage, bandSelectivity, designForBand, dialLaw, slugTuning } from '../../src/core/band';
+import { bandCoverage, bandSelectivity, designForBand } from '../../src/core/band';
+import { dialLaw } from '../../src/core/dial';
+import { slugTuning } from '../../src/core/slug';
 
 // Demo job (invented, the fictional Larkspur Lane workshop): 5.9–6.2 MHz with a 10–365 pF capacitor.
 const band = { lowFrequency: 5.9e6, highFrequency: 6.2e6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, margin: 0.01 };

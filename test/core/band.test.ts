@@ -11,10 +11,9 @@
 import { describe, expect, it } from 'vitest';
 import { create, all } from 'mathjs';
 import fc from 'fast-check';
-import {
-  bandCoverage, bandSelectivity, designForBand, dialLaw, slugTuning, PADDER_SWITCH_RATIO,
-  type BandCircuit,
-} from '../../src/core/band';
+import { bandCoverage, bandSelectivity, designForBand, PADDER_SWITCH_RATIO, type BandCircuit } from '../../src/core/band';
+import { dialLaw } from '../../src/core/dial';
+import { slugTuning } from '../../src/core/slug';
 import { designCoil } from '../../src/core/coil';
 import { DesignError } from '../../src/core/errors';
 import { fieldOf, rel, thomson } from '../helpers/asserts';

@@ -21,6 +21,7 @@ import {
 import { BAND_FIELDS, CAPACITOR_KINDS, COIL_KEYS } from '../../components/benches/bandFields';
 import { planBand, type BandPlan } from '../../components/benches/bandPlan';
 import { trackBand } from '../../components/benches/bandTracking';
+import { curvesOf, ownDialFor, slugFor } from '../../components/benches/bandCurves';
 import { pairsForBand } from '../../components/benches/bandPairs';
 import { coilLink, tankLink } from '../../components/benches/bandLinks';
 import { COIL_FIELDS } from '../../components/benches/coilFields';
@@ -163,6 +164,21 @@ describe('Band plan', () => {
     expect(Math.abs(im.rejection - rule)).toBeLessThan(1.5);
   });
 
+  it('the plotted curves agree with the plan at its points: dial ends on the band covered, selectivity and image at mid-band; worked out once', async () => {
+    const { plan } = await run(stateOf({}));
+    const c = curvesOf(plan!);
+    expect(curvesOf(plan!)).toBe(c);
+    const d = plan!.design;
+    for (const law of [c.dial.slc, c.dial.slf]) {
+      expect(rel(law.frequency[0], d.lowFrequency)).toBeLessThan(1e-12);
+      expect(rel(law.frequency[law.frequency.length - 1], d.highFrequency)).toBeLessThan(1e-12);
+    }
+    const mid = (c.selectivity.frequency.length - 1) / 2;
+    expect(rel(c.selectivity.frequency[mid], plan!.selectivity.middle.frequency)).toBeLessThan(1e-12);
+    expect(rel(c.selectivity.loadedQ[mid], plan!.selectivity.middle.loadedQ)).toBeLessThan(1e-9);
+    expect(c.image![mid]).toBeCloseTo(plan!.image!.middle.rejection, 9);
+  });
+
   it('no superhet: no image and no tracking', async () => {
     const { raw, plan } = await run(stateOf({ osc: 'none' }));
     expect(plan!.image).toBeUndefined();
@@ -199,9 +215,10 @@ describe('Tuning slug and plate table', () => {
     + (d.padderCapacitance === undefined ? cv + d.trimmerCapacitance : (d.padderCapacitance * (cv + d.trimmerCapacitance)) / (d.padderCapacitance + cv + d.trimmerCapacitance));
 
   it('a ±10 % slug moves the band by √(L/L′) without widening it, and sets the designed L for the band asked', async () => {
-    const { plan } = await run(stateOf({}, { slug: '10' }));
+    const s = stateOf({}, { slug: '10' });
+    const { raw, plan } = await run(s);
     const d = plan!.design;
-    const slug = plan!.slug!;
+    const slug = slugFor(raw, s.choices)!;
     expect(rel(slug.lowestFrequency, thomson(1.1 * d.inductance, network(d, d.maxCapacitance)))).toBeLessThan(1e-12);
     expect(rel(slug.highestFrequency, thomson(0.9 * d.inductance, network(d, d.minCapacitance)))).toBeLessThan(1e-12);
     expect(rel(slug.slugIn.frequencyRatio, slug.slugOut.frequencyRatio)).toBeLessThan(1e-12);
@@ -214,33 +231,44 @@ describe('Tuning slug and plate table', () => {
   });
 
   it('no slug: none in the plan; a slug the core refuses is told at its field', async () => {
-    expect((await run(stateOf({}))).plan!.slug).toBeUndefined();
+    const s = stateOf({});
+    expect(slugFor((await run(s)).raw, s.choices)).toBeUndefined();
     const f = fieldByKey(TABLE, 'slug') as ValueFieldDef;
     expect(readFieldTextSync(f, '95', {}).kind).toBe('error');
     expect(readFieldTextSync(f, '0', {}).kind).toBe('error');
   });
 
   it('the user’s plate table: Thomson’s frequency at each of its points in the designed circuit', async () => {
-    const { plan } = await run(stateOf({}, { plates: '0: 365p; 45°: 250p; 90: 150p; 135: 60p; 180: 10p' }));
+    const s = stateOf({}, { plates: '0: 365p; 45°: 250p; 90: 150p; 135: 60p; 180: 10p' });
+    const { raw, plan } = await run(s);
     const d = plan!.design;
-    const law = plan!.ownDial!;
+    const law = ownDialFor(raw, s.choices)!;
     expect(law.plates).toBe('table');
     expect(law.percent[0]).toBe(0);
     expect(law.percent[law.percent.length - 1]).toBe(100);
     for (const [angle, c] of [[0, 365e-12], [45, 250e-12], [90, 150e-12], [135, 60e-12], [180, 10e-12]] as const) {
-      const i = law.angle.findIndex((a) => Math.abs(a - angle) < 1e-9);
+      const i = law.angle.findIndex((a: number) => Math.abs(a - angle) < 1e-9);
       expect(i, String(angle)).toBeGreaterThanOrEqual(0);
       expect(rel(law.frequency[i], thomson(d.inductance, network(d, c)))).toBeLessThan(1e-9);
     }
   });
 
   it('a plate table that does not fall steadily is told at its field; one off the capacitor’s range gets a note', async () => {
-    const bad = await run(stateOf({}, { plates: '0: 365p; 90: 380p; 180: 10p' }));
-    expect(bad.path).toBe('plates');
-    expect(bad.message).toMatch(/steadily/);
+    const s = stateOf({}, { plates: '0: 365p; 90: 380p; 180: 10p' });
+    const bad = await run(s);
+    expect(bad.plan).toBeDefined(); // the plan stands; the table's own computation refuses it
+    let refused: unknown;
+    try {
+      ownDialFor(bad.raw, s.choices);
+    } catch (e) {
+      refused = e;
+    }
+    expect(isDesignError(refused) && refused.field).toBe('plates');
+    expect((refused as Error).message).toMatch(/steadily/);
     expect(routeDesignError(TABLE, defaultChoices(TABLE), 'plates')).toBe('plates');
-    const off = await run(stateOf({}, { plates: '0: 500p; 180: 15p' }));
-    expect(off.plan!.notes.some((n) => n.field === 'plates' && /another band/.test(n.message))).toBe(true);
+    const o = stateOf({}, { plates: '0: 500p; 180: 15p' });
+    const law = ownDialFor((await run(o)).raw, o.choices)!;
+    expect(law.notes.some((n) => n.field === 'plates' && /another band/.test(n.message))).toBe(true);
   });
 
   it('a plate table’s text: points by semicolon, each an angle and a capacitance, refused with the point named', () => {
