@@ -24,7 +24,7 @@ import { createWakingBench, inParts, Later, type BenchParts } from '../kit/Later
 import { LinkNotices } from '../kit/LinkNotices';
 import { AnswerDock, Summary, type DockedAnswer, type SummaryItem } from '../kit/Summary';
 import { BAND_FIELDS, COIL_KEYS } from './bandFields';
-import { bandText, hz, planBand, sayQ, sayTurns, type BandPlan } from './bandPlan';
+import { bandText, hz, planBand, sayQ, sayTurns, windBand, type BandPlan } from './bandPlan';
 
 /**
  * The cards under the answer (rows with formulas, the selectivity table, plots, tracking, pairs,
@@ -133,8 +133,24 @@ function BandBenchParts(outer: BenchParts<BandFormulas>) {
   );
 }
 
-/** The results: the plan (a computation on the bench), the answer first, then the cards (their code in a chunk of their own). */
+/**
+ * The results. The plan's first half (the band designed, its coil wound: the
+ * coil model's first run is the heaviest single piece of work on the page) is
+ * worked out in this part's task; the selectivity, the answer and the cards
+ * in the next (kit/Later), so a phone never blocks long on one. windBand keeps
+ * its last result, so the plan does not wind the coil again.
+ */
 function BandResults(props: { bench: BenchState; formulas: BandFormulas; onAnswer: (answer: DockedAnswer | undefined) => void }) {
+  props.bench.compute((raw, choices) => windBand(raw, choices));
+  return (
+    <Later>
+      <BandAnswer {...props} />
+    </Later>
+  );
+}
+
+/** The plan (a computation on the bench), the answer first, then the cards (their code in a chunk of their own). */
+function BandAnswer(props: { bench: BenchState; formulas: BandFormulas; onAnswer: (answer: DockedAnswer | undefined) => void }) {
   const calc = props.bench.compute((raw, choices): BandRun => ({ plan: planBand(raw, choices), raw, choices }));
   const items = createMemo(() => (calc.result() ? summaryItems(calc.result()!.plan) : undefined));
   createEffect(() => props.onAnswer(items() && { items: items()!, stale: calc.stale() }));

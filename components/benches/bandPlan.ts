@@ -26,7 +26,7 @@
  * the spec builder's errors are given it here too).
  */
 import { designForBand, bandSelectivity, type BandDesign, type BandSelectivity } from '../../src/core/band';
-import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
+import { designCoil, type DesignCoilResult, type DesignCoilSpec } from '../../src/core/coil';
 import { DesignError, isDesignError, withinSpec } from '../../src/core/errors';
 import type { DesignNote } from '../../src/core/notes';
 import type { TankInput } from '../../src/core/tankModel';
@@ -106,18 +106,48 @@ export interface BandPlan {
   notes: DesignNote[];
 }
 
+/** The band designed and its coil wound: the first half of a plan. */
+export interface BandWinding {
+  design: BandDesign;
+  /** The coil's spec without L, turns or frequency. */
+  base: DesignCoilSpec;
+  /** designCoil of it for the band's L at mid-band (as bandSelectivity winds it). */
+  coil: DesignCoilResult;
+}
+
+let lastWinding: { raw: SpecObject; choices: Choices; result: BandWinding } | undefined;
+
+/**
+ * The band designed (designForBand) and its coil wound (designCoil for the
+ * band's L at the middle of the band covered): the first half of `planBand`.
+ * The bench works it out in a task of its own before the selectivity (a
+ * phone then never blocks long on one), so the last one is kept for the same
+ * values and choices (the same objects: the bench's spec is a memo).
+ * @throws DesignError with a spec path the table routes
+ */
+export function windBand(raw: SpecObject, choices: Choices): BandWinding {
+  if (lastWinding && lastWinding.raw === raw && lastWinding.choices === choices) return lastWinding.result;
+  const design = bandDesign(raw, choices);
+  const base = bandCoilSpec(raw, choices);
+  const middle = 0.5 * (design.lowFrequency + design.highFrequency);
+  const coil = inCoilTerms(choices, () => withinSpec(COIL_PREFIX, () => designCoil({ ...base, inductance: design.inductance, frequency: middle } as DesignCoilSpec)));
+  const result = { design, base, coil };
+  lastWinding = { raw, choices, result };
+  return result;
+}
+
 /**
  * The whole plan for the bench's values (SI by path, as `bench.spec()` or
  * `snapshotToSpec(BAND_FIELDS, …)` gives) and its choices.
  * @throws DesignError with a spec path the table routes
  */
 export function planBand(raw: SpecObject, choices: Choices): BandPlan {
-  const design = bandDesign(raw, choices);
-  const base = bandCoilSpec(raw, choices);
+  const { design, base, coil } = windBand(raw, choices);
   const coilQ = num(raw, 'coilQ');
   const selectivityAt = (points: number) => inCoilTerms(choices, () => bandSelectivity({
     band: design,
     coil: base,
+    woundCoil: coil,
     ...(coilQ === undefined ? {} : { coilQ }),
     capacitorQ: num(raw, 'capacitorQ'),
     sourceResistance: num(raw, 'sourceResistance'),
@@ -126,7 +156,6 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
   }));
   // Low, middle and high now; the curve (a tank analysis per point) when a plot asks.
   const selectivity = selectivityAt(2);
-  const coil = selectivity.coil as DesignCoilResult;
   const coilSpec = { ...base, inductance: design.inductance, frequency: selectivity.middle.frequency } as DesignCoilSpec;
   const side = superhetSide(choices);
   const ifreq = num(raw, 'intermediateFrequency');

@@ -460,6 +460,13 @@ export interface BandSelectivityInput {
    * interpolated between them (monotone cubic).
    */
   coil?: DesignCoilSpec;
+  /**
+   * The coil already wound: `designCoil` of `coil` with the band's inductance
+   * at mid-band, as a caller that has just wound it holds it (saves winding it
+   * again). Not checked against `coil` beyond being a wound solenoid, toroid
+   * or multilayer result with finite turns and inductance.
+   */
+  woundCoil?: DesignCoilResult;
   /** The coil's Q, instead of (or overriding the Q of) the coil spec; held constant across the band. */
   coilQ?: number;
   /** Q of the tuning capacitors (variable, trimmer and padder alike), or their tan δ; omit for ideal. */
@@ -505,6 +512,15 @@ export interface BandSelectivity {
   notes: DesignNote[];
 }
 
+/** A wound coil handed in: the figures bandSelectivity reads, checked for shape. */
+function checkWound(value: unknown): DesignCoilResult {
+  const w = requireObject<DesignCoilResult>('woundCoil', value, 'The wound coil');
+  if (!['solenoid', 'toroid', 'multilayer'].includes(w.form)) throw new DesignError('woundCoil', 'The wound coil must be a result of designCoil (solenoid, toroid or multilayer).');
+  tankValue('woundCoil', w.turns, 'The wound coil\'s turns');
+  tankValue('woundCoil', w.inductance, 'The wound coil\'s inductance', 'H');
+  if (w.q !== undefined) tankValue('woundCoil', w.q, 'The wound coil\'s Q');
+  return w;
+}
 
 /**
  * Q, bandwidth and dynamic resistance across the band: at each frequency f
@@ -539,7 +555,9 @@ export function bandSelectivity(input: BandSelectivityInput): BandSelectivity {
   if (input.coil !== undefined) {
     const spec = requireObject<DesignCoilSpec>('coil', input.coil, 'The coil');
     const base = { ...spec, turns: undefined, inductance: undefined, sweepPoints: undefined };
-    coil = withinSpec('coil', () => designCoil({ ...base, inductance: l, frequency: middleFrequency } as DesignCoilSpec));
+    coil = input.woundCoil === undefined
+      ? withinSpec('coil', () => designCoil({ ...base, inductance: l, frequency: middleFrequency } as DesignCoilSpec))
+      : checkWound(input.woundCoil);
     const wound = coil;
     const turns = wound.turns;
     if (fixedQ === undefined && wound.q === undefined) {
@@ -550,7 +568,11 @@ export function bandSelectivity(input: BandSelectivityInput): BandSelectivity {
       // designCoil at a few frequencies, monotone cubic between: Q varies smoothly across a band (about as √f).
       // Only the low, middle and high frequency when no curve is asked for (they are nodes either way, so their Q is the same).
       const nodes = Array.from(frequencyGrid({ start: cover.lowFrequency, stop: cover.highFrequency, points: points <= 3 ? 3 : COIL_Q_NODES, spacing: 'linear' }));
-      const qs = nodes.map((f) => withinSpec('coil', () => designCoil({ ...base, turns, frequency: f } as DesignCoilSpec).q as number));
+      // The middle node is the frequency the coil was wound at: its Q is the wound coil's own.
+      const centre = (nodes.length - 1) / 2;
+      const qs = nodes.map((f, i) => (i === centre && wound.q !== undefined && Math.abs(f / middleFrequency - 1) < 1e-12
+        ? wound.q
+        : withinSpec('coil', () => designCoil({ ...base, turns, frequency: f } as DesignCoilSpec).q as number)));
       qAt = monotoneInterpolator(nodes, qs);
     }
     const off = wound.inductance / l - 1;
@@ -589,7 +611,8 @@ export function bandSelectivity(input: BandSelectivityInput): BandSelectivity {
   const curve = { frequency: [] as number[], coilQ: [] as number[], unloadedQ: [] as number[], loadedQ: [] as number[], bandwidth: [] as number[], dynamicResistance: [] as number[] };
   const grid = frequencyGrid({ start: cover.lowFrequency, stop: cover.highFrequency, points, spacing: 'linear' });
   for (const f of grid) {
-    const p = at(f);
+    // The band's ends and middle are worked out above: a tank analysis each is enough.
+    const p = f === cover.lowFrequency ? low : f === cover.highFrequency ? high : f === middleFrequency ? middle : at(f);
     curve.frequency.push(f);
     curve.coilQ.push(p.coilQ);
     curve.unloadedQ.push(p.unloadedQ);

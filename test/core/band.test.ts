@@ -430,6 +430,18 @@ describe('bandSelectivity', () => {
     expect(rel(s.middle.coilQ, designCoil({ ...big, turns, frequency: s.middle.frequency }).q as number)).toBeLessThan(1e-12);
   });
 
+  it('a coil already wound (designCoil for the band\'s L at mid-band) gives the same selectivity as winding it there; a bad one is refused', () => {
+    const own = bandSelectivity({ band: d, coil, capacitorQ: 1000, sourceResistance: 20e3, loadResistance: 50e3, points: 7 });
+    const middle = 0.5 * (own.low.frequency + own.high.frequency);
+    const woundCoil = designCoil({ ...coil, inductance: d.inductance, frequency: middle });
+    const given = bandSelectivity({ band: d, coil, woundCoil, capacitorQ: 1000, sourceResistance: 20e3, loadResistance: 50e3, points: 7 });
+    expect(given.coil).toBe(woundCoil);
+    expect(given.curve).toEqual(own.curve);
+    expect(given.middle.loadedQ).toBe(own.middle.loadedQ);
+    expect(fieldOf(() => bandSelectivity({ band: d, coil, woundCoil: { ...woundCoil, turns: Number.NaN } }))).toBe('woundCoil');
+    expect(fieldOf(() => bandSelectivity({ band: d, coil, woundCoil: 'wound' as never }))).toBe('woundCoil');
+  });
+
   it('with a fixed coil Q and ideal capacitors the unloaded Q is the coil\'s (1/Q = Σ 1/Q_i, Pozar)', () => {
     const s = bandSelectivity({ band: d, coilQ: 150, points: 3 });
     for (const q of s.curve.unloadedQ) expect(q).toBeCloseTo(150, 6);

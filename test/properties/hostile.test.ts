@@ -113,6 +113,7 @@ const TABLE: Record<string, Entry> = {
     calls: [
       [{ band: bandCircuit, coil: { form: 'solenoid', diameter: 20e-3, pitch: 1e-3, wire: { diameter: 0.5e-3 } }, capacitorQ: 1000, sourceResistance: 20e3, loadResistance: 50e3, points: 5 }],
       [{ band: bandCircuit, coilQ: 150, dissipationFactor: 0.001, points: 3 }],
+      [{ band: bandCircuit, coil: { form: 'solenoid', diameter: 20e-3, pitch: 1e-3, wire: { diameter: 0.5e-3 } }, woundCoil: { form: 'solenoid', turns: 20, inductance: 7.5e-6, q: 150 }, points: 3 }],
     ],
   },
   imageFrequency: { calls: [[6.05e6, 455e3, 'below'], [6.05e6, 455e3]] },
