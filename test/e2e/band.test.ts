@@ -127,6 +127,31 @@ describe.runIf(browserAvailable())('Band bench in Chromium', () => {
     expect([...errors, ...coilErrors, ...tankErrors]).toEqual([]);
   });
 
+  it('a tuning slug and the capacitor’s own plates: the band the slug reaches, the plates on the tuning curve; a bad table told at its field while the answer stands', async () => {
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/band/`);
+    await hydrated(page);
+    const L = await valueOf(page, 'out-L');
+    await retype(page, 'slug', '10');
+    await page.locator('#out-slug-low').waitFor();
+    // Thomson's formula: the slug fully in (1.1 L) with the plates meshed gives the band's low end × 1/√1.1
+    await expect.poll(async () => rel(await valueOf(page, 'out-slug-low'), (await valueOf(page, 'out-low')) / Math.sqrt(1.1))).toBeLessThan(1e-3);
+    expect(rel(await valueOf(page, 'out-slug-set'), L)).toBeLessThan(0.05);
+    await retype(page, 'plates', '0: 365p; 90: 380p; 180: 10p');
+    await expect.poll(() => messageAt(page, 'plates')).toMatch(/steadily/);
+    expect(await page.locator('#summary').getAttribute('class')).not.toContain('tw-summary--stale');
+    await retype(page, 'plates', '0: 365p; 45: 250p; 90: 150p; 135: 60p; 180: 10p');
+    await expect.poll(() => messageAt(page, 'plates')).toBeNull();
+    await page.locator('#plot-dial').scrollIntoViewIfNeeded();
+    await expect.poll(() => page.locator('#plot-dial').textContent()).toMatch(/Your plates/);
+    await retype(page, 'plates', '0: 365p; ninety: 150p');
+    await expect.poll(() => messageAt(page, 'plates')).toMatch(/Point 2 .*the angle/);
+    await retype(page, 'plates', '0: 365p; 180: 10p');
+    await expect.poll(() => page.url()).toMatch(/plates=0%3A\+365p%3B\+180%3A\+10p/);
+    await retype(page, 'slug', '');
+    await expect.poll(() => page.locator('#out-slug-low').count()).toBe(0);
+    expect(errors).toEqual([]);
+  });
+
   it('shows the tracking and the fixed pairs when scrolled to', async () => {
     const { page, errors } = await openPage(env.browser, `${env.site.origin}/band/`);
     await hydrated(page);
