@@ -47,6 +47,8 @@ export interface CapacitiveDividerInput {
   sourceResistance: number;
   /** Resistance the source must be seen as across the whole tank, ohms (> sourceResistance). */
   presentedResistance: number;
+  /** The rest of the tank's loading across the top (its own loss and the load), ohms, for the step-up; default: presentedResistance (a match). */
+  restResistance?: number;
 }
 
 /** A capacitive divider, exact and by the usual rule. Farads, ohms. */
@@ -57,7 +59,7 @@ export interface CapacitiveDivider {
   lowerCapacitance: number;
   /** C1 C2/(C1 + C2): a little above the tank's capacitance, as the source's loading takes some. */
   seriesCapacitance: number;
-  /** |V_top / V_joint| at the frequency with the exact values. */
+  /** |V_top / V_joint| at the frequency with the exact values, the source driving the joint and the coil resonating C with `restResistance` across the top: Z_t/(Z_t + 1/(jωC1)), Z_t = R_rest ∥ jωL, ω²LC = 1. */
   stepUp: number;
   /** Q2 = ωC2 R_s of the lower branch (exact values): the usual rule needs it well above 1 (say 10). */
   branchQ: number;
@@ -107,6 +109,7 @@ export function capacitiveDivider(input: CapacitiveDividerInput): CapacitiveDivi
   const f = tankValue('frequency', i.frequency, 'The frequency', 'Hz');
   const rs = tankValue('sourceResistance', i.sourceResistance, 'The source resistance', 'Ω');
   const rp = tankValue('presentedResistance', i.presentedResistance, 'The resistance to present', 'Ω');
+  const rest = i.restResistance === undefined ? rp : tankValue('restResistance', i.restResistance, 'The rest of the tank\'s loading', 'Ω');
   const w = TWO_PI * f;
   if (!(rp > rs * (1 + 1e-9))) {
     throw new DesignError('sourceResistance', `The ${sayQuantity(rs, 'Ω')} source is not below the ${sayQuantity(rp, 'Ω')} it must be seen as across the tank: a capacitive divider only steps a resistance up. Connect the source across the top instead.`);
@@ -123,8 +126,10 @@ export function capacitiveDivider(input: CapacitiveDividerInput): CapacitiveDivi
   const x1 = bSer - aSer * rs * b2;
   const c1 = requireFiniteResult('capacitance', 1 / (w * x1), 'The upper capacitor');
   const c2 = requireFiniteResult('capacitance', b2 / w, 'The lower capacitor');
-  const z2 = { re: gs / (gs * gs + b2 * b2), im: -b2 / (gs * gs + b2 * b2) };
-  const stepUp = Math.hypot(z2.re, z2.im - x1) / Math.hypot(z2.re, z2.im);
+  // Z_t = R_rest ∥ jX_L with X_L = 1/(ωC): the coil resonating the tank's capacitance
+  const xl = 1 / (w * c);
+  const zt = { re: (rest * xl * xl) / (rest * rest + xl * xl), im: (rest * rest * xl) / (rest * rest + xl * xl) };
+  const stepUp = Math.hypot(zt.re, zt.im) / Math.hypot(zt.re, zt.im - x1);
   const branchQ = b2 * rs;
 
   const n = Math.sqrt(rp / rs);

@@ -341,7 +341,7 @@ function buildOption(kind: MatchOptionKind, x: OptionContext): MatchOption {
   const { winding, nodeOf } = coilParts(r, loadTaps);
   const loadNode = load ? nodeOf(load.tap?.practicalTapTurns ?? Infinity) : undefined;
   if (kind === 'capacitiveDivider') {
-    const divider = capacitiveDivider({ capacitance: t.capacitance, frequency: t.frequency, sourceResistance: rs, presentedResistance: sourceTarget });
+    const divider = capacitiveDivider({ capacitance: t.capacitance, frequency: t.frequency, sourceResistance: rs, presentedResistance: sourceTarget, restResistance: 1 / (1 / t.dynamicResistance + gl) });
     const parts: MatchPart[] = [
       winding,
       { kind: 'capacitor', name: 'upper', from: 'top', to: 'mid', capacitance: divider.upperCapacitance },
