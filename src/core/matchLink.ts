@@ -83,6 +83,7 @@ export function checkLink(spec: LinkSpec | undefined, w: WoundSolenoid): LinkGeo
   if (diameter > 100 * coilDiameter) throw new DesignError('link.diameter', `A link of ${sayMm(diameter)} around a ${sayMm(coilDiameter)} coil hardly couples to it: keep it within a few times the coil's diameter.`);
   const pitch = s.pitch === undefined ? insulatedDiameter : requirePositive('link.pitch', s.pitch, 'The link\'s pitch', 'm');
   if (pitch < insulatedDiameter * (1 - 1e-12)) throw new DesignError('link.pitch', `pitch ${sayMm(pitch)} is smaller than the link wire's ${sayMm(insulatedDiameter)}: its turns would overlap.`);
+  if (pitch > diameter) throw new DesignError('link.pitch', `A pitch of ${sayMm(pitch)} spreads the link's turns wider apart than its ${sayMm(diameter)} diameter: a link is wound close.`);
   const coilLength = w.geometry.turns * w.geometry.pitch;
   const position = s.position === undefined ? 0 : requireFinite('link.position', s.position, 'The link\'s position');
   if (Math.abs(position) > coilLength + 10 * coilDiameter) {

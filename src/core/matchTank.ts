@@ -304,6 +304,7 @@ export function placeTap(w: WoundSolenoid, resistance: number, wanted: number): 
 export function givenTap(w: WoundSolenoid, field: string, tap: unknown, resistance: number): TapPlacement {
   const n = checkTap(field, tap, w.geometry.turns);
   const step = stepUpAt(w, n);
+  if (!Number.isFinite(step * step * resistance)) throw new DesignError(field, 'The tap is too close to the cold end to present the resistance at all: move it up the coil.');
   return placementAt(w, n, n, resistance, { tapTurns: n, practicalTapTurns: n, stepUp: step, presentedResistance: step * step * resistance });
 }
 

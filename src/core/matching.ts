@@ -36,7 +36,7 @@ import {
   attempt, checkLoadedQ, coilParts, estimateFigures, givenTap, placeTap, placementNotes, resolveTankForMatch, sideCircuit, sideTarget, tappable,
   type MatchEstimate, type MatchTank, type MatchTankSpec, type SideInput, type SideTarget, type TankForMatch, type TapPlacement,
 } from './matchTank';
-import { type DesignNote } from './notes';
+import { note, type DesignNote } from './notes';
 import { tankValue } from './tankModel';
 import { sayNumber, sayQuantity } from './text';
 
@@ -101,15 +101,16 @@ export function designTap(input: TapInput): TapDesign {
   const circuit = sideCircuit(r, target, [winding], nodeOf(tap.practicalTapTurns));
   const gx = target.across === undefined ? 0 : 1 / target.across;
   const estimate = estimateFigures(r.tank, 1 / tap.presentedResistance, gx, undefined, target.resistance);
+  const response = analyzeMatchCircuit(circuit, { bandwidth: estimate.bandwidth });
   return {
     tank: r.tank,
     wantedResistance: target.wanted,
     tap,
     estimate,
     turnsRatioEstimate: estimateFigures(r.tank, 1 / tap.turnsRatioGuess.presentedResistance, gx, undefined, target.resistance),
-    response: analyzeMatchCircuit(circuit, { bandwidth: estimate.bandwidth }),
+    response,
     circuit,
-    notes: [...r.tank.notes, ...placementNotes(tap, w.geometry.turns, 'resistance', 'resistance')],
+    notes: [...r.tank.notes, ...placementNotes(tap, w.geometry.turns, 'resistance', 'resistance'), ...responseNotes(r.tank, estimate, response)],
   };
 }
 
@@ -304,6 +305,24 @@ export function designMatch(spec: MatchSpec): MatchDesign {
   };
 }
 
+/**
+ * What the exact circuit says beyond the high-Q rules: a loaded Q more than
+ * 10 % from the estimate, and a loaded resonance moved by more than a quarter
+ * of the bandwidth (with the trim of the tank capacitor that puts it back,
+ * ΔC ≈ 2C Δf/f0 from Thomson's formula).
+ */
+function responseNotes(t: MatchTank, e: MatchEstimate, r: MatchResponse): DesignNote[] {
+  const notes: DesignNote[] = [];
+  if (Math.abs(r.loadedQ / e.loadedQ - 1) > 0.1) {
+    notes.push(note('info', `In the full circuit this option gives a loaded Q of ${sayNumber(r.loadedQ)}, not the ${sayNumber(e.loadedQ)} of the high-Q rules: its own parts (a network with a Q of its own, or the sections' leakage) change the selectivity. The circuit's figures are the ones to trust.`, 'loadedQ'));
+  }
+  const shift = r.frequency - t.frequency;
+  if (Math.abs(shift) > 0.25 * r.bandwidth) {
+    notes.push(note('info', `The loaded resonance sits at ${sayQuantity(r.frequency, 'Hz', 4)}, ${sayQuantity(Math.abs(shift), 'Hz', 3)} ${shift > 0 ? 'above' : 'below'} the tank's own: ${shift > 0 ? 'add' : 'take off'} about ${sayQuantity(2 * t.capacitance * Math.abs(shift) / t.frequency, 'F')} at the tank capacitor (trimmer) to bring it back.`, 'capacitance'));
+  }
+  return notes;
+}
+
 interface OptionContext {
   r: TankForMatch;
   rs: number;
@@ -328,7 +347,8 @@ function buildOption(kind: MatchOptionKind, x: OptionContext): MatchOption {
       parts,
     };
     const estimate = estimateFigures(t, 1 / presented, gl, load ? gl : undefined, rs);
-    return { ...extra, available: true as const, circuit, estimate, response: analyzeMatchCircuit(circuit, { bandwidth: estimate.bandwidth }), notes };
+    const response = analyzeMatchCircuit(circuit, { bandwidth: estimate.bandwidth });
+    return { ...extra, available: true as const, circuit, estimate, response, notes: [...notes, ...responseNotes(t, estimate, response)] };
   };
   const tankCap = (c: number): MatchPart => ({ kind: 'capacitor', name: 'tank', from: 'top', to: '0', capacitance: c });
   if (kind === 'tap') {

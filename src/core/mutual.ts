@@ -39,7 +39,7 @@
 import { MU_0 } from './constants';
 import { designCoil, type DesignCoilResult, type SolenoidCoilSpec } from './coil';
 import { ellipticFromComplement } from './elliptic';
-import { DesignError, requireFinite, requireFiniteResult, requireNonNegative, requireObject, requirePositive, withinSpec } from './errors';
+import { DesignError, requireFinite, requireFiniteResult, requireInRange, requireNonNegative, requireObject, requirePositive, withinSpec } from './errors';
 import { nagaokaCoefficient, rosaKm, rosaKs } from './solenoid';
 import { note, type DesignNote } from './notes';
 import { sayNumber } from './text';
@@ -228,7 +228,7 @@ export function runMutual(g: SolenoidGeometry, a: number, b: number, c: number, 
 export interface TappedCoilInput {
   /** The coil as on the Coil bench: a single-layer solenoid with `turns` (or an `inductance`, wound to the nearest half turn). */
   coil: SolenoidCoilSpec;
-  /** The tap, in turns counted from the cold (earthy) end: 0 < tap ≤ turns; half turns and any real value allowed. */
+  /** The tap, in turns counted from the cold (earthy) end: 0.01 ≤ tap ≤ turns; half turns and any real value allowed. */
   tapTurns: number;
   /** Working frequency, Hz: the sections then lose the skin effect's share of the wire's internal inductance, as `designCoil` does. */
   frequency?: number;
@@ -281,6 +281,7 @@ export function woundSolenoid(spec: unknown, frequency?: number): WoundSolenoid 
   if (s.form !== 'solenoid') {
     throw new DesignError('coil.form', 'A tap or a link is worked out from a single-layer solenoid\'s geometry: give the coil as a single-layer solenoid (form "solenoid").');
   }
+  if (frequency !== undefined) requireInRange('frequency', frequency, 1e-3, 1e12, 'The frequency', 'Hz');
   const coil = withinSpec('coil', () => designCoil({ ...s, sweepPoints: undefined, frequency } as SolenoidCoilSpec));
   const pitch = coil.pitch as number;
   const geometry: SolenoidGeometry = { radius: s.diameter / 2, pitch, wireDiameter: s.wire.diameter, insulatedDiameter: s.wire.insulatedDiameter ?? s.wire.diameter, turns: coil.turns };
@@ -304,14 +305,17 @@ export function sectionsAt(w: WoundSolenoid, n: number): { lower: number; upper:
   return { lower: lower - n * w.skinLossPerTurn, upper: upper - (N - n) * w.skinLossPerTurn, mutual, whole };
 }
 
-/** Checks a tap position against the coil: 0 < tap ≤ N. */
+/** The least tap taken, turns from the cold end (a hundredth of a turn: closer than any tap can be made). */
+export const MIN_TAP = 0.01;
+
+/** Checks a tap position against the coil: 0.01 ≤ tap ≤ N. */
 export function checkTap(field: string, tap: unknown, turns: number, what = 'The tap'): number {
   const n = requireFinite(field, tap, what);
   if (n > turns * (1 + 1e-12)) {
     throw new DesignError(field, `${what} at ${sayNumber(n, 4)} turns is beyond the coil: it has only ${sayNumber(turns, 4)} turns (count from the cold end).`);
   }
-  if (!(n > 0)) {
-    throw new DesignError(field, `${what} must be above the cold end: give the turns from the cold end to the tap, more than 0 (got ${sayNumber(n, 4)}).`);
+  if (!(n >= MIN_TAP)) {
+    throw new DesignError(field, `${what} must be above the cold end: give the turns from the cold end to the tap, at least ${sayNumber(MIN_TAP)} (got ${sayNumber(n, 4)}).`);
   }
   return Math.min(n, turns);
 }
@@ -368,7 +372,7 @@ export function tappedInductorRatio(sections: { lowerInductance: number; upperIn
  * as in `solenoidInductance`), with the step-up they give and the
  * ideal-transformer guess N/n beside it.
  * @param input.coil a single-layer solenoid spec (as `designCoil` takes it; turns or inductance)
- * @param input.tapTurns turns from the cold end to the tap, 0 < n ≤ N (any real value)
+ * @param input.tapTurns turns from the cold end to the tap, 0.01 ≤ n ≤ N (any real value)
  * @param input.frequency Hz, optional: the sections at that frequency (skin effect), as designCoil's inductanceAtFrequency
  * @throws DesignError('tapTurns') for a tap beyond the coil or at the cold end; 'coil.…' for the coil
  */

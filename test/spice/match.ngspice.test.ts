@@ -154,8 +154,14 @@ describe.runIf(run)('match designs against ngspice', () => {
       const span = 4 * o.response.bandwidth;
       const s = simulate(`option-${o.kind}`, o.circuit, f0 - span, f0 + span, 8001);
       const q = loadedQOf(s.f, s.vload);
-      figures.push(`${o.kind}: loaded Q ngspice ${q.toFixed(3)}, core exact ${o.response.loadedQ.toFixed(3)}, high-Q estimate ${o.estimate.loadedQ.toFixed(3)}`);
+      // Z_in at the core's loaded resonance, interpolated between ngspice's points
+      const k = s.f.findIndex((x) => x > f0) - 1;
+      const t = (f0 - s.f[k]) / (s.f[k + 1] - s.f[k]);
+      const z = { re: s.zin[k].re + t * (s.zin[k + 1].re - s.zin[k].re), im: s.zin[k].im + t * (s.zin[k + 1].im - s.zin[k].im) };
+      const dz = Math.hypot(z.re - o.response.inputImpedance.re, z.im - o.response.inputImpedance.im) / Math.hypot(o.response.inputImpedance.re, o.response.inputImpedance.im);
+      figures.push(`${o.kind}: loaded Q ngspice ${q.toFixed(3)}, core exact ${o.response.loadedQ.toFixed(3)}, high-Q estimate ${o.estimate.loadedQ.toFixed(3)}; Z_in ngspice ${z.re.toFixed(2)}${z.im < 0 ? '−' : '+'}j${Math.abs(z.im).toFixed(2)} Ω (${dz.toExponential(1)} from the core)`);
       expect(rel(q, o.response.loadedQ), o.kind).toBeLessThan(1e-4);
+      expect(dz, o.kind).toBeLessThan(1e-4);
     }
   });
 
