@@ -127,3 +127,17 @@ export type {
   CoilSweep,
   DesignCoilResult,
 } from './coil';
+export { mutualInductanceCoaxialLoops, mutualInductanceCoaxialWindings, tappedCoilSections, tappedInductorRatio } from './mutual';
+export type { CoaxialWinding, TappedCoilInput, TappedCoilSections } from './mutual';
+export { resolveMatchTank } from './matchTank';
+export type { MatchTankSpec, MatchTank, MatchEstimate, TapPlacement, SideInput } from './matchTank';
+export { capacitiveDivider, lNetwork } from './matchNetworks';
+export type { CapacitiveDividerInput, CapacitiveDivider, LNetworkInput, LNetwork } from './matchNetworks';
+export { designLink } from './matchLink';
+export type { LinkSpec, LinkPlacement, LinkInput, LinkDesign } from './matchLink';
+export { designTap, designMatch, MATCH_OPTION_KINDS, MATCH_SPEC_FIELDS } from './matching';
+export type { TapInput, TapDesign, MatchOptionKind, MatchSpec, LoadPlacement, MatchOption, TapOption, DividerOption, LinkOption, LNetworkOption, LNetworkParts, UnavailableOption, MatchDesign } from './matching';
+export { matchCircuitAt, analyzeMatchCircuit, sweepMatchCircuit } from './matchCircuit';
+export type { MatchCircuit, MatchPart, CircuitWinding, MatchPoint, MatchResponse, MatchSweep } from './matchCircuit';
+export { matchNetlist } from './matchNetlist';
+export type { MatchNetlistOptions } from './matchNetlist';

@@ -49,6 +49,15 @@ const bandCircuit = { inductance: 7.5e-6, minCapacitance: 10e-12, maxCapacitance
 // tracking (demo values, invented: a 530–1600 kHz set, IF 455 kHz, 10–365 pF gang)
 const trackingDemo = { lowFrequency: 530e3, highFrequency: 1600e3, intermediateFrequency: 455e3, oscillatorSide: 'above', signal: { inductance: 230e-6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, trimmerCapacitance: 20e-12 }, points: 21 };
 const trackingOscillator = { inductance: 125.5e-6, minCapacitance: 10e-12, maxCapacitance: 365e-12, strayCapacitance: 12e-12, trimmerCapacitance: 28.6e-12, padderCapacitance: 384e-12 };
+// the match bench (demo values, invented): a 16-turn 20 mm coil and a tapped tank as a circuit
+const matchCoil = { form: 'solenoid', diameter: 20e-3, pitch: 1e-3, turns: 16, wire: { diameter: 0.5e-3, insulatedDiameter: 0.55e-3 } };
+const matchCircuit = {
+  frequency: 7.38e6, sourceNode: 'tap', sourceResistance: 50, loadNode: 'top', loadResistance: 30e3, topNode: 'top',
+  parts: [
+    { kind: 'windings', name: 'coil', windings: [{ name: 'coil1', from: '0', to: 'tap', inductance: 1.6e-7, resistance: 0.03 }, { name: 'coil2', from: 'tap', to: 'top', inductance: 3.96e-6, resistance: 0.2 }], coupling: [[1, 0.336], [0.336, 1]] },
+    { kind: 'capacitor', name: 'tank', from: 'top', to: '0', capacitance: 100e-12 },
+  ],
+};
 /** Q figures an ideal part or a missing termination makes Infinity (TankAnalysis). */
 const TANK_INFINITE = ['coilQ', 'capacitorQ', 'unloadedQ', 'externalQ', 'dynamicResistance'];
 
@@ -122,6 +131,26 @@ const TABLE: Record<string, Entry> = {
   trackingPoints: { calls: [[530e3, 1600e3]] },
   designTracking: { calls: [[trackingDemo], [{ ...trackingDemo, oscillatorStrayCapacitance: 0, trackingFrequencies: [600e3, 950e3, 1500e3] }]] },
   trackingError: { calls: [[{ ...trackingDemo, oscillator: trackingOscillator }]] },
+  mutualInductanceCoaxialLoops: { calls: [[10e-3, 15e-3, 5e-3]] },
+  mutualInductanceCoaxialWindings: { calls: [[{ radius: 10e-3, position: 0, pitch: 1e-3, turns: 10 }, { radius: 12e-3, position: 2e-3, pitch: 0.6e-3, turns: 2.5, firstTurn: 0 }]] },
+  tappedCoilSections: { calls: [[{ coil: matchCoil, tapTurns: 2.5, frequency: 7e6 }], [{ coil: matchCoil, tapTurns: 16 }]] },
+  tappedInductorRatio: { calls: [[{ lowerInductance: 1.6e-7, upperInductance: 3.3e-6, mutualInductance: 2.6e-7 }]] },
+  resolveMatchTank: { calls: [[{ coil: matchCoil, capacitance: 100e-12, capacitorQ: 1000 }], [{ inductance: 4.7e-6, capacitance: 100e-12, unloadedQ: 150 }]] },
+  capacitiveDivider: { calls: [[{ capacitance: 100e-12, frequency: 7.3e6, sourceResistance: 50, presentedResistance: 5.8e3, restResistance: 6e3 }]] },
+  lNetwork: { calls: [[{ frequency: 7.3e6, sourceResistance: 50, presentedResistance: 5.8e3, capacitance: 100e-12 }]] },
+  designTap: { calls: [[{ coil: matchCoil, capacitance: 100e-12, resistance: 50, loadedQ: 12 }], [{ coil: matchCoil, capacitance: 100e-12, unloadedQ: 150, resistance: 75, acrossResistance: 30e3 }]] },
+  designLink: { calls: [[{ coil: matchCoil, capacitance: 100e-12, resistance: 50, link: { diameter: 21.1e-3, position: -5e-3, pitch: 0.55e-3 } }]] },
+  designMatch: {
+    calls: [
+      [{ coil: matchCoil, capacitance: 100e-12, sourceResistance: 50, loadResistance: 1000, loadedQ: 12, split: 'equal', link: { position: 0 } }],
+      [{ inductance: 4.7e-6, capacitance: 100e-12, unloadedQ: 150, sourceResistance: 50, loadResistance: 20e3, loadConnection: 'top', options: ['capacitiveDivider', 'highPassL'] }],
+      [{ coil: matchCoil, capacitance: 100e-12, sourceResistance: 75, loadResistance: 2e3, loadTapTurns: 6, options: ['tap'] }],
+    ],
+  },
+  matchCircuitAt: { calls: [[matchCircuit, 7.3e6]] },
+  analyzeMatchCircuit: { calls: [[matchCircuit, { bandwidth: 6e5 }], [matchCircuit]] },
+  sweepMatchCircuit: { calls: [[matchCircuit, { start: 6e6, stop: 8e6, points: 21, spacing: 'linear' }], [matchCircuit]] },
+  matchNetlist: { calls: [[matchCircuit, { sweep: { start: 6e6, stop: 8e6, points: 21, spacing: 'linear' }, dataFile: 'm.data', title: 'demo' }], [matchCircuit]] },
   toleranceSpread: { calls: [[{ inductance: 4.7e-6, capacitance: 100e-12, strayCapacitance: 12e-12, selfCapacitance: 3e-12, inductanceTolerance: 0.05, capacitanceTolerance: 0.05, strayTolerance: 0.25, samples: 50, seed: 3, distribution: 'normal' }]] },
   complex: { calls: [[3, 4], [3]] },
   cAdd: { calls: [[z(1, 2), z(3, -1)]] },
