@@ -7,8 +7,7 @@
  * Tracking, pairs and hand-offs load their own code when their section
  * comes near the screen, as the kit's Plot loads uPlot.
  */
-import { createMemo, createSignal, For, onCleanup, onMount, Show, type Accessor, type JSX } from 'solid-js';
-import type { SlugTuning } from '../../src/core/slug';
+import { createEffect, createMemo, createSignal, For, onCleanup, onMount, Show, type Accessor, type JSX } from 'solid-js';
 import type { PairCandidate } from '../../src/core/pairs';
 import { formatNumber, formatQuantity, formatQuantityCompact } from '../../src/quantity';
 import type { BenchState } from '../kit/bench';
@@ -17,31 +16,31 @@ import { formatShift } from '../kit/format';
 import { Formula } from '../kit/Formula';
 import { Later } from '../kit/Later';
 import { NoteList } from '../kit/Note';
-import { Plot } from '../kit/Plot';
 import { ResultRow } from '../kit/ResultRow';
 import type { BandFormulas, BandRun } from './BandBench';
-import { curvesOf, ownDialFor, slugFor } from './bandCurves';
-import { bandText, hz, sayQ, sayTurns } from './bandPlan';
+import { bandText, hz, sayDb, sayQ, sayTurns, signedHz } from './bandPlan';
 
 const pf = (c: number) => formatQuantityCompact(c, 'F', 3);
-const sayDb = (x: number) => `${formatNumber(x, 3)} dB`;
-/** Axis and readout labels: engineering notation without trailing zeros. */
-const tickHz = (x: number | null) => (x == null || !Number.isFinite(x) ? '' : formatQuantityCompact(x, 'Hz', 4));
-const tickPercent = (x: number | null) => (x == null || !Number.isFinite(x) ? '' : `${formatNumber(x, 3)} %`);
-const signedHz = (x: number) => (x < 0 ? `−${formatQuantity(-x, 'Hz', 3)}` : formatQuantity(x, 'Hz', 3));
 
 /**
  * A module loaded once the element with this id comes near the screen (or
  * at once where IntersectionObserver is missing); undefined until then.
  */
-function loadNear<T>(id: string, load: () => Promise<T>): { module: Accessor<T | undefined>; failed: Accessor<boolean> } {
+function loadNear<T>(id: string, load: () => Promise<T>, also?: () => boolean): { module: Accessor<T | undefined>; failed: Accessor<boolean> } {
   const [module, setModule] = createSignal<T>();
   const [failed, setFailed] = createSignal(false);
-  onMount(() => {
-    const go = () => load().then((m) => setModule(() => m), (e: unknown) => {
+  let started = false;
+  const go = () => {
+    if (started) return;
+    started = true;
+    load().then((m) => setModule(() => m), (e: unknown) => {
       console.warn(e);
       setFailed(true);
     });
+  };
+  // Sooner when asked for (a slug or plate table typed far from the place it shows).
+  if (also) createEffect(() => { if (also()) go(); });
+  onMount(() => {
     const el = document.getElementById(id);
     if (!el || typeof IntersectionObserver === 'undefined') return void go();
     const io = new IntersectionObserver((entries) => {
@@ -65,14 +64,6 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
   const d = () => p()?.design;
   const sel = () => p()?.selectivity;
   const stale = () => calc.stale();
-  // The slug and the plate table: computations of their own, so a bad entry is told at its field while the plan stands.
-  const slug = bench.compute((raw, choices) => ({ slug: slugFor(raw, choices) }));
-  const own = bench.compute((raw, choices) => ({ dial: ownDialFor(raw, choices) }));
-  const curves = () => curvesOf(p()!);
-  const notes = createMemo(() => {
-    const seen = new Set<string>();
-    return [...(p()?.notes ?? []), ...(slug.result()?.slug?.notes ?? []), ...(own.result()?.dial?.notes ?? [])].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true)));
-  });
   const linkCode = loadNear('handoff', () => import('./bandLinks'));
   const links = createMemo(() => {
     const m = linkCode.module();
@@ -121,9 +112,7 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
       </Later>
 
       <Later>
-        <Show when={slug.result()?.slug}>
-          <SlugRows slug={slug.result()!.slug!} stale={slug.stale()} />
-        </Show>
+        <SlugNear bench={bench} />
       </Later>
 
       <Later>
@@ -161,56 +150,11 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
       </Later>
 
       <Later>
-        <NoteList notes={notes()} />
+        <NoteList notes={p()?.notes ?? []} />
       </Later>
 
       <Later>
-        <Show when={p()}>
-          <Plot
-            id="plot-dial"
-            caption={`Tuning curve: frequency against dial rotation, 0 % with the plates meshed. Solid: straight-line-capacitance plates; dashed: straight-line-frequency plates cut for this circuit${own.result()?.dial ? '; third: your plate table, 0 % at its first angle' : ''}. The padder crowds the meshed end of a straight-line-capacitance dial.`}
-            x={curves().dial.slc.percent}
-            xLabel="Rotation"
-            formatX={tickPercent}
-            series={[
-              { label: 'SLC', values: curves().dial.slc.frequency, unit: 'Hz' },
-              { label: 'SLF', values: curves().dial.slf.frequency, unit: 'Hz', dash: true },
-              ...(own.result()?.dial ? [{ label: 'Your plates', values: own.result()!.dial!.frequency, unit: 'Hz' }] : []),
-            ]}
-            yLabel="Frequency"
-            formatY={tickHz}
-            markers={[{ x: 50, label: 'half way' }]}
-            stale={stale()}
-          />
-          <Formula math={f.dial} source="dial laws of the two plate shapes; Thomson’s formula for each setting" validity="real straight-line-frequency plates are cut for one circuit and follow this only roughly" />
-          <Plot
-            id="plot-selectivity"
-            caption="Selectivity across the band: loaded Q (solid) and unloaded Q (dashed) on the left, the −3 dB bandwidth on the right."
-            x={curves().selectivity.frequency}
-            xLabel="Frequency"
-            formatX={tickHz}
-            series={[
-              { label: 'Loaded Q', values: curves().selectivity.loadedQ, format: sayQ },
-              { label: 'Unloaded Q', values: curves().selectivity.unloadedQ, dash: true, format: sayQ },
-              { label: 'Bandwidth', values: curves().selectivity.bandwidth.map((b) => b / 1e3), unit: 'kHz', axis: 'right' },
-            ]}
-            yLabel="Q"
-            y2Label="Bandwidth (kHz)"
-            stale={stale()}
-          />
-          <Show when={p()!.image}>
-            <Plot
-              id="plot-image"
-              caption="Image rejection of the signal tank across the band, dB below its response on tune."
-              x={curves().selectivity.frequency}
-              xLabel="Frequency"
-              formatX={tickHz}
-              series={[{ label: 'Image rejection', values: curves().image ?? [], unit: 'dB', format: sayDb }]}
-              yLabel="Rejection (dB)"
-              stale={stale()}
-            />
-          </Show>
-        </Show>
+        <BandPlotsNear bench={bench} calc={calc} formula={f.dial} />
       </Later>
 
       <Later>
@@ -242,29 +186,46 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
   );
 }
 
-/** A tuning slug: how far it moves the band, and where to set it for the band asked. */
-function SlugRows(props: { slug: SlugTuning; stale: boolean }) {
-  const s = () => props.slug;
+/** True when the slug or the plate table is given: their code is then loaded at once. */
+const extrasAsked = (bench: BenchState) => () => !bench.field('slug').blank() || !bench.field('plates').blank();
+
+/** Tuning with a slug: its code and computation arrive when a slug is given (or its place comes near). */
+function SlugNear(props: { bench: BenchState }) {
+  const code = loadNear('slug-part', () => import('./BandExtras'), extrasAsked(props.bench));
   return (
-    <section class="band-stack" aria-labelledby="slug-title">
-      <h2 class="band-heading" id="slug-title">Tuning slug</h2>
-      <ResultRow id="out-slug-low" label="Lowest frequency, slug fully in" value={s().lowestFrequency} unit="Hz" significant={4} stale={props.stale} />
-      <ResultRow id="out-slug-high" label="Highest frequency, slug fully out" value={s().highestFrequency} unit="Hz" significant={4} stale={props.stale}>
-        <p class="tw-formula-meta" id="out-slug-detail">
-          The slug runs the coil from {formatQuantity(s().minInductance, 'H', 4)} to {formatQuantity(s().maxInductance, 'H', 4)}: it moves the whole band,
-          by a factor of up to {formatNumber(s().slugFrequencyRatio, 4)}, without widening it (the capacitor network sets the ratio, {formatNumber(s().capacitorRatio, 4)}).
-          Slug in: {bandText(s().slugIn.lowFrequency, s().slugIn.highFrequency)}; slug out: {bandText(s().slugOut.lowFrequency, s().slugOut.highFrequency)}.
-        </p>
-      </ResultRow>
-      <Show when={s().setting}>
-        <ResultRow id="out-slug-set" label="Slug setting for the band asked" symbol="L" value={s().setting!.inductance} unit="H" significant={4} stale={props.stale}>
-          <p class="tw-formula-meta">
-            Any inductance from {formatQuantity(s().setting!.inductanceForLowEnd, 'H', 4)} to {formatQuantity(s().setting!.inductanceForHighEnd, 'H', 4)} covers it;
-            {s().setting!.withinSlugRange ? ` the middle leaves ${formatNumber(s().setting!.spare * 100, 2)} % spare at each end.` : ' the slug does not reach that window (see the notes).'}
-            {' '}Thomson’s formula with L scaled: the slug moves every frequency by √(L/L′).
-          </p>
-        </ResultRow>
+    <div id="slug-part">
+      <Show when={code.module()}>
+        {(m) => {
+          const SlugSection = m().SlugSection;
+          return <SlugSection bench={props.bench} />;
+        }}
       </Show>
+    </div>
+  );
+}
+
+/**
+ * The plots (tuning curve, selectivity, image rejection): drawn when their
+ * place comes near the screen (or a plate table is given), so a phone loads
+ * and hydrates no plot code at first; the space they take is held meanwhile.
+ * The dial law's formula is the page's and stays in place.
+ */
+function BandPlotsNear(props: { bench: BenchState; calc: Computed<BandRun>; formula: JSX.Element }) {
+  const code = loadNear('plots', () => import('./BandExtras'), extrasAsked(props.bench));
+  const superhet = () => props.bench.choice('osc') !== 'none';
+  return (
+    <section class="band-stack" id="plots" aria-labelledby="plots-title">
+      <h2 class="band-heading" id="plots-title">Tuning curve and selectivity, plotted</h2>
+      <Show
+        when={code.module()}
+        fallback={<p class="tw-table-note band-plots-waiting" classList={{ 'band-plots-waiting--three': superhet() }}>{code.failed() ? 'The plots could not be loaded; the rest of the bench is unaffected.' : 'The plots are drawn when you scroll to them.'}</p>}
+      >
+        {(m) => {
+          const BandPlots = m().BandPlots;
+          return <BandPlots bench={props.bench} calc={props.calc} />;
+        }}
+      </Show>
+      <Formula math={props.formula} source="dial laws of the two plate shapes; Thomson’s formula for each setting" validity="real straight-line-frequency plates are cut for one circuit and follow this only roughly" />
     </section>
   );
 }
@@ -321,7 +282,11 @@ function BandPairs(props: { bench: BenchState; formula: JSX.Element }) {
 
 /** Superhet tracking: the oscillator's coil, trimmer and padder, and the error curve (a computation of its own). */
 function BandTrackingPart(props: { bench: BenchState; formula: JSX.Element }) {
-  const code = loadNear('tracking', () => import('./bandTracking'));
+  // The tracking's code and its plot's arrive together when the section comes near.
+  const code = loadNear('tracking', async () => {
+    const [tracking, extras] = await Promise.all([import('./bandTracking'), import('./BandExtras')]);
+    return { trackBand: tracking.trackBand, TrackingPlot: extras.TrackingPlot };
+  });
   const calc = props.bench.compute((raw, choices) => code.module()?.trackBand(raw, choices));
   const stale = () => calc.stale();
   const t = () => calc.result() ?? undefined;
@@ -347,17 +312,10 @@ function BandTrackingPart(props: { bench: BenchState; formula: JSX.Element }) {
             <ResultRow id="out-track" label="Largest tracking error" value={tr()!.largestError.error} unit="Hz" significant={3} stale={stale()}>
               <p class="tw-formula-meta" id="out-track-detail">At {formatQuantity(tr()!.largestError.signalFrequency, 'Hz', 4)}: the oscillator is {signedHz(tr()!.largestError.error)} off, {formatNumber(Math.abs(tr()!.largestError.relativeError) * 100, 2)} % of the IF.</p>
             </ResultRow>
-            <Plot
-              id="plot-tracking"
-              caption={`Tracking error across the band: the oscillator's frequency minus signal ${side() === 'below' ? '−' : '+'} IF. Zero at the three tracking points, marked.`}
-              x={tr()!.curve.signalFrequency}
-              xLabel="Signal frequency"
-              formatX={tickHz}
-              series={[{ label: 'Error', values: tr()!.curve.error, unit: 'Hz', format: signedHz }]}
-              yLabel="Error (Hz)"
-              markers={tr()!.trackingFrequencies.map((x, i) => ({ x, label: `f${'₁₂₃'[i]}` }))}
-              stale={stale()}
-            />
+            {(() => {
+              const TrackingPlot = code.module()!.TrackingPlot;
+              return <TrackingPlot tracking={tr()!} side={side()} stale={stale()} />;
+            })()}
             <NoteList notes={t()!.notes} />
           </Show>
         </section>

@@ -31,7 +31,7 @@ import { DesignError, isDesignError, withinSpec } from '../../src/core/errors';
 import type { DesignNote } from '../../src/core/notes';
 import type { TankInput } from '../../src/core/tankModel';
 import { imageRejection, type OscillatorSide } from '../../src/core/image';
-import { formatQuantityCompact, parseQuantityRange } from '../../src/quantity';
+import { formatNumber, formatQuantity, formatQuantityCompact, parseQuantityRange } from '../../src/quantity';
 import { getPath, type Choices, type SpecObject } from '../kit/fields';
 import { capacitorKindRange, COIL_PREFIX } from './bandFields';
 import { buildCoilSpec } from './coilFields';
@@ -193,6 +193,10 @@ export function bandDesign(raw: SpecObject, choices: Choices): BandDesign {
 export const hz = (f: number) => formatQuantityCompact(f, 'Hz', 4);
 /** A Q as people say it: whole numbers from 10 up, two figures below. */
 export const sayQ = (q: number) => (q >= 10 ? String(Math.round(q)) : q.toPrecision(2));
+/** A frequency error with its sign: "−1.23 kHz". */
+export const signedHz = (x: number) => (x < 0 ? `−${formatQuantity(-x, 'Hz', 3)}` : formatQuantity(x, 'Hz', 3));
+/** Decibels, 3 figures. */
+export const sayDb = (x: number) => `${formatNumber(x, 3)} dB`;
 /** Turns as wound: "33.5", "46". */
 export const sayTurns = (n: number) => String(Number(n.toFixed(1)));
 
