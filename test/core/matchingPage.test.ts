@@ -13,12 +13,13 @@
  * (Grover 1946); the high-Q rules written out by hand (Pozar; Terman 1943);
  * the capacitive divider's admittance and the L-network's reactances
  * written out here; the link's mutual inductance as the loop-by-loop sum.
+ * The README's rows for the match exports are checked against the core too.
  * The worked examples are demo data (invented parts, a fictional workshop).
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
-  MU_0, analyzeTank, capacitiveDivider, designCoil, designMatch, designTap, insertionLoss, lNetwork,
+  MU_0, analyzeTank, capacitiveDivider, designCoil, designLink, designMatch, designTap, insertionLoss, lNetwork, matchNetlist,
   mutualInductanceCoaxialLoops, mutualInductanceCoaxialWindings, tappedCoilSections, type MatchOption,
 } from '../../src/core';
 import { rel, thomson } from '../helpers/asserts';
@@ -406,5 +407,73 @@ describe('the matching page, statements outside the examples', () => {
       const off = Math.abs(o.response.loadedQ / o.estimate.loadedQ - 1) > 0.1;
       expect(o.notes.some((n) => n.field === 'loadedQ' && /loaded Q/.test(n.message)), o.kind).toBe(off);
     }
+  });
+});
+
+describe('the README\'s rows for the match exports', () => {
+  const readme = readFileSync(new URL('../../README.md', import.meta.url), 'utf8');
+  const start = readme.indexOf('### Matching the antenna and the next stage');
+  const section = readme.slice(start, readme.indexOf('\n### ', start + 1));
+  /** In exponent form without a plus sign: "6.308e6". */
+  const sci = (x: number, sig = 4): string => x.toExponential(sig - 1).replace('e+', 'e');
+  /** A figure as the README writes it: the value to `sig` figures, in exponent form below 0.01 or from 10⁴ up. */
+  const num = (x: number, sig = 4): string => {
+    const v = Number(x.toPrecision(sig));
+    return Math.abs(v) >= 0.01 && Math.abs(v) < 1e4 ? String(v) : sci(v, sig);
+  };
+  const row = (name: string): string => {
+    const line = section.split('\n').find((l) => l.startsWith(`| \`${name}`));
+    expect(line, `README row for ${name}`).toBeDefined();
+    return line as string;
+  };
+
+  it('gives the figures the core gives', () => {
+    expect(start).toBeGreaterThan(0);
+    expect(row('mutualInductanceCoaxialLoops')).toContain(`→ ${num(mutualInductanceCoaxialLoops(10e-3, 10e-3, 1e-3))} H`);
+    const link = mutualInductanceCoaxialWindings({ radius: 10e-3, position: 0, pitch: 1e-3, turns: 18 }, { radius: 10.55e-3, position: 0, pitch: 0.55e-3, turns: 2 });
+    expect(row('mutualInductanceCoaxialWindings')).toContain(`→ ${num(link)} H`);
+    const s = tappedCoilSections({ coil, tapTurns: 2 });
+    expect(row('tappedCoilSections')).toContain(
+      `lowerInductance: ${num(s.lowerInductance)}, upperInductance: ${sci(s.upperInductance)}, mutualInductance: ${num(s.mutualInductance)}, `
+      + `couplingCoefficient: ${s.couplingCoefficient.toFixed(3)}, stepUp: ${num(s.stepUp)}, turnsRatio: ${s.turnsRatio}, leakageInductance: ${num(s.leakageInductance)}`,
+    );
+    expect(row('tappedInductorRatio')).toContain(`→ ${num(s.stepUp)}`);
+    expect(row('resolveMatchTank')).toContain(
+      `frequency: ${sci(tank.frequency)}, inductance: ${num(tank.inductance)}, reactance: ${num(tank.reactance)}, dynamicResistance: ${sci(tank.dynamicResistance)}`,
+    );
+    const tap = designTap({ ...tankSpec, resistance: antenna, loadedQ: wantedQ });
+    expect(row('designTap')).toContain(
+      `tap ${num(tap.tap.tapTurns, 3)} turns from the cold end (make it ${tap.tap.practicalTapTurns}), \`estimate.loadedQ\` ${num(tap.estimate.loadedQ)}, `
+      + `\`response.loadedQ\` ${tap.response.loadedQ.toFixed(2)}; the turns ratio would say ${tap.tap.turnsRatioGuess.tapTurns.toFixed(2)}`,
+    );
+    const t = option('tap');
+    expect(row('designMatch')).toContain(
+      `load tap ${frontEnd.load!.tap!.practicalTapTurns} turns, antenna tap ${t.tap.practicalTapTurns} turns, exact loaded Q ${t.response.loadedQ.toFixed(1)} `
+      + `and transducer loss ${num(t.response.transducerLoss as number, 3)} dB; \`direct.loadedQ\` ${num(designMatch({ ...tankSpec, sourceResistance: antenna, loadResistance: nextStage, loadConnection: 'top', options: ['tap'] }).direct.loadedQ, 3)}`,
+    );
+    const d = option('capacitiveDivider').divider;
+    expect(row('capacitiveDivider')).toContain(
+      `${num(frontEnd.sourceTarget / 1e3)} kΩ → C1 ${num(d.upperCapacitance)} F, C2 ${num(d.lowerCapacitance)} F; the usual values present ${Math.round(d.approximate.resistanceError * 100)} % too much (\`approximate.resistanceError\` ${num(d.approximate.resistanceError, 2)}`,
+    );
+    const lp = option('lowPassL').network;
+    const hp = option('highPassL').network;
+    expect(row('lNetwork')).toContain(
+      `\`networkQ\` ${num(lp.networkQ)}; low-pass ${num(lp.seriesInductance as number)} H in series, tank capacitor ${num(lp.tankCapacitance)} F; `
+      + `high-pass ${num(hp.seriesCapacitance as number)} F in series, tank capacitor ${num(hp.tankCapacitance)} F`,
+    );
+    const lk = designLink({ ...tankSpec, resistance: antenna });
+    expect(row('designLink')).toContain(
+      `→ ${num(lk.link.turns, 3)} turns (wind ${lk.link.practicalTurns}), M ${num(lk.link.mutualInductance)} H, k ${num(lk.link.couplingCoefficient, 3)}, `
+      + `presents ${sci(lk.link.presentedResistance)} Ω for ${sci(lk.wantedResistance)} Ω wanted, exact loaded Q ${num(lk.response.loadedQ, 3)}`,
+    );
+    const r = t.response;
+    expect(row('matchCircuitAt')).toContain(
+      `frequency: ${sci(r.frequency)}, bandwidth: ${sci(r.bandwidth)}, loadedQ: ${r.loadedQ.toFixed(1)}, transducerLoss: ${num(r.transducerLoss as number, 3)}, `
+      + `inputImpedance: { re: ${num(r.inputImpedance.re)}, im: ${num(r.inputImpedance.im)} }`,
+    );
+    const k = t.circuit.parts.find((p) => p.kind === 'windings');
+    expect(k?.kind).toBe('windings');
+    expect(row('matchNetlist')).toContain(`\`K1_0_1 Lcoil1 Lcoil2 ${(k as { coupling: number[][] }).coupling[0][1].toExponential(11)}\``);
+    expect(matchNetlist(t.circuit)).toContain(`K1_0_1 Lcoil1 Lcoil2 ${(k as { coupling: number[][] }).coupling[0][1].toExponential(11)}`);
   });
 });
