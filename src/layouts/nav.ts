@@ -10,6 +10,7 @@ export const NAV: readonly NavItem[] = [
   { href: '/coil/', label: 'Coil' },
   { href: '/tank/', label: 'Tank' },
   { href: '/band/', label: 'Band' },
+  { href: '/match/', label: 'Match' },
   { href: '/methods/', label: 'Methods' },
   { href: '/cautions/', label: 'Cautions' },
 ];
