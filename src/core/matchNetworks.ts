@@ -57,7 +57,7 @@ export interface CapacitiveDivider {
   upperCapacitance: number;
   /** C2, joint to ground, the source across it (exact). */
   lowerCapacitance: number;
-  /** C1 C2/(C1 + C2): a little above the tank's capacitance, as the source's loading takes some. */
+  /** C1 C2/(C1 + C2): a little below the tank's capacitance, as the loaded lower branch acts as a larger capacitor. */
   seriesCapacitance: number;
   /** |V_top / V_joint| at the frequency with the exact values, the source driving the joint and the coil resonating C with `restResistance` across the top: Z_t/(Z_t + 1/(jωC1)), Z_t = R_rest ∥ jωL, ω²LC = 1. */
   stepUp: number;

@@ -12,47 +12,15 @@
  * rule they round, GUM first-order propagation, the universal resonance curve).
  * The worked examples are demo data (invented parts, a fictional workshop).
  */
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { fig, flat, methodPage, parts } from '../helpers/pageExamples';
 import {
   analyzeTank, bandCoverage, bandSelectivity, designForBand, designTracking, dialLaw, eSeries, imageRejection,
   nearestPreferredValue, PADDER_SWITCH_RATIO, preferredNeighbours, resonantPairs, slugTuning, toleranceSpread,
 } from '../../src/core';
 import { isDesignError } from '../../src/core/errors';
 
-const page = readFileSync(new URL('../../content/docs/band-planning.md', import.meta.url), 'utf8');
-
-/** Whitespace (line breaks inside paragraphs and tables) as single spaces. */
-const flat = (text: string): string => text.replace(/\s+/g, ' ').trim();
-
-/** The worked example titled `title`: its paragraph and a table right after it. */
-function example(title: string): string {
-  const blocks = page.split(/\n\s*\n/);
-  const i = blocks.findIndex((b) => b.startsWith(`**Worked example (${title}).**`));
-  expect(i, `no worked example "${title}" on the page`).toBeGreaterThanOrEqual(0);
-  const table = blocks[i + 1]?.startsWith('|') ? `\n${blocks[i + 1]}` : '';
-  return flat(blocks[i] + table);
-}
-
-// ---------------------------------------------------------------------------
-// The page's number formats: SI prefixes, figures as written (trailing zeros kept).
-
-const PREFIXES: ReadonlyArray<readonly [number, string]> = [[1e9, 'G'], [1e6, 'M'], [1e3, 'k'], [1, ''], [1e-3, 'm'], [1e-6, 'µ'], [1e-9, 'n'], [1e-12, 'p']];
-
-/** x to `sig` figures, trailing zeros kept, never in exponent form. */
-function fig(x: number, sig: number): string {
-  const t = x.toPrecision(sig);
-  return t.includes('e') ? String(Number(t)) : t;
-}
-
-/** Mantissa and prefix of |x|, the mantissa to `sig` figures in [1, 1000). */
-function parts(x: number, sig: number): { mantissa: string; prefix: string } {
-  const a = Math.abs(x);
-  let k = PREFIXES.findIndex(([s]) => a >= s);
-  if (k < 0) k = PREFIXES.length - 1;
-  if (k > 0 && Number(fig(a / PREFIXES[k][0], sig)) >= 1000) k--;
-  return { mantissa: fig(a / PREFIXES[k][0], sig), prefix: PREFIXES[k][1] };
-}
+const { page, example, expectExample } = methodPage('band-planning.md');
 
 const MINUS = '\u2212';
 
@@ -88,17 +56,6 @@ function pct(x: number, sig: number, signed = false): string {
 /** An input length in millimetres, as typed: "0.55 mm". */
 const mm = (x: number): string => `${exact(fig(x * 1e3, EXACT))} mm`;
 
-/**
- * Every claim appears in the example, and nothing with a digit is left once
- * they are all taken out (longest first, so "12.4 pF" goes before "12 pF").
- */
-function expectExample(title: string, claims: string[]): void {
-  const text = example(title);
-  for (const c of claims) expect(text, `worked example (${title}) should say "${c}"`).toContain(c);
-  let rest = text;
-  for (const c of [...new Set(claims)].sort((a, b) => b.length - a.length)) rest = rest.replaceAll(c, ' ');
-  expect(rest.match(/[^\s]*\d[^\s]*/g) ?? [], `figures in worked example (${title}) that no check covers`).toEqual([]);
-}
 
 // ---------------------------------------------------------------------------
 // The demo parts (invented): a 10–365 pF capacitor with 12 pF of strays.

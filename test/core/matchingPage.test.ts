@@ -18,46 +18,14 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { fig, flat, methodPage, parts } from '../helpers/pageExamples';
 import {
   MU_0, analyzeTank, capacitiveDivider, designCoil, designLink, designMatch, designTap, insertionLoss, lNetwork, matchNetlist,
   mutualInductanceCoaxialLoops, mutualInductanceCoaxialWindings, tappedCoilSections, type MatchOption,
 } from '../../src/core';
 import { rel, thomson } from '../helpers/asserts';
 
-const page = readFileSync(new URL('../../content/docs/matching.md', import.meta.url), 'utf8');
-
-/** Whitespace (line breaks inside paragraphs and tables) as single spaces. */
-const flat = (text: string): string => text.replace(/\s+/g, ' ').trim();
-
-/** The worked example titled `title`: its paragraph and the tables right after it, if any. */
-function example(title: string): string {
-  const blocks = page.split(/\n\s*\n/);
-  const i = blocks.findIndex((b) => b.startsWith(`**Worked example (${title}).**`));
-  expect(i, `no worked example "${title}" on the page`).toBeGreaterThanOrEqual(0);
-  let end = i + 1;
-  while (blocks[end]?.startsWith('|')) end++;
-  return flat(blocks.slice(i, end).join('\n'));
-}
-
-// ---------------------------------------------------------------------------
-// The page's number formats: SI prefixes, figures as written (trailing zeros kept).
-
-const PREFIXES: ReadonlyArray<readonly [number, string]> = [[1e9, 'G'], [1e6, 'M'], [1e3, 'k'], [1, ''], [1e-3, 'm'], [1e-6, 'µ'], [1e-9, 'n'], [1e-12, 'p']];
-
-/** x to `sig` figures, trailing zeros kept, never in exponent form. */
-function fig(x: number, sig: number): string {
-  const t = x.toPrecision(sig);
-  return t.includes('e') ? String(Number(t)) : t;
-}
-
-/** Mantissa and prefix of |x|, the mantissa to `sig` figures in [1, 1000). */
-function parts(x: number, sig: number): { mantissa: string; prefix: string } {
-  const a = Math.abs(x);
-  let k = PREFIXES.findIndex(([s]) => a >= s);
-  if (k < 0) k = PREFIXES.length - 1;
-  if (k > 0 && Number(fig(a / PREFIXES[k][0], sig)) >= 1000) k--;
-  return { mantissa: fig(a / PREFIXES[k][0], sig), prefix: PREFIXES[k][1] };
-}
+const { page, example, expectExample } = methodPage('matching.md');
 
 /** "4.646 µH" (a computed value to `sig` figures). */
 function q(x: number, unit: string, sig = 3): string {
@@ -79,17 +47,6 @@ const pct = (x: number, sig: number): string => `${fig(Math.abs(x) * 100, sig)} 
 /** A loss in decibels: "0.891 dB". */
 const dB = (x: number, sig = 3): string => `${fig(x, sig)} dB`;
 
-/**
- * Every claim appears in the example, and nothing with a digit is left once
- * they are all taken out (longest first, so "12.19" goes before "12").
- */
-function expectExample(title: string, claims: string[]): void {
-  const text = example(title);
-  for (const c of claims) expect(text, `worked example (${title}) should say "${c}"`).toContain(c);
-  let rest = text;
-  for (const c of [...new Set(claims)].sort((a, b) => b.length - a.length)) rest = rest.replaceAll(c, ' ');
-  expect(rest.match(/[^\s]*\d[^\s]*/g) ?? [], `figures in worked example (${title}) that no check covers`).toEqual([]);
-}
 
 // ---------------------------------------------------------------------------
 // The workshop's front end (invented): 18 turns on a 20 mm former, 137 pF in all, Q_u 150,
