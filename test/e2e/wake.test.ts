@@ -31,7 +31,7 @@ async function openAsleep(env: ReturnType<typeof useSiteAndBrowser>, path: strin
 describe.runIf(browserAvailable())('benches waking up in parts', () => {
   const env = useSiteAndBrowser();
 
-  for (const path of ['/coil/', '/tank/', '/resonance/', '/band/']) {
+  for (const path of ['/coil/', '/tank/', '/resonance/', '/band/', '/match/']) {
     it(`${path}: hydration keeps the server's page, element for element`, async () => {
       const context = await env.browser.newContext({ viewport: { width: 390, height: 844 } });
       const page = await context.newPage();
