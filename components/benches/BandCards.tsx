@@ -68,7 +68,7 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
   const links = createMemo(() => {
     const m = linkCode.module();
     const run = r();
-    return m && run ? { coil: m.coilLink(run.raw, run.choices, run.plan), tank: m.tankLink(run.plan) } : undefined;
+    return m && run ? { coil: m.coilLink(run.raw, run.choices, run.plan), tank: m.tankLink(run.plan), match: m.matchLink(run.plan) } : undefined;
   });
 
   return (
@@ -167,7 +167,7 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
 
       <Later>
         <section class="tw-table-block band-handoff" aria-labelledby="handoff-title" id="handoff">
-          <h2 id="handoff-title">Next: wind the coil, tune the tank</h2>
+          <h2 id="handoff-title">Next: wind the coil, tune the tank, match it</h2>
           <Show when={links()} fallback={<p>{r() ? 'Preparing the links…' : 'Complete the inputs to carry this design to the Coil and Tank benches.'}</p>}>
             <ul class="band-links">
               <li>
@@ -177,6 +177,10 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
               <li>
                 <a id="to-tank" href={links()!.tank}>Tune the tank at mid-band on the Tank bench</a>{' '}
                 <span class="tw-formula-meta">(carries L, the coil’s Q there, the strays as its self-capacitance, the capacitance that tunes it, the capacitor’s Q, source and load)</span>
+              </li>
+              <li>
+                <a id="to-match" href={links()!.match}>Match the antenna and the next stage on the Match bench</a>{' '}
+                <span class="tw-formula-meta">(carries the coil as wound and everything across it at mid-band; taps and links are found from its winding)</span>
               </li>
             </ul>
           </Show>

@@ -8,7 +8,7 @@
  * builder) and lays out what it returns: the answer first, then the detailed
  * cards with their formulas, the notes, the plot and the hand-off to the tank.
  */
-import { createEffect, createMemo, createSignal, Show, untrack, type JSX } from 'solid-js';
+import { createEffect, createMemo, createSignal, onMount, Show, untrack, type JSX } from 'solid-js';
 import type { DesignCoilResult, DesignCoilSpec } from '../../src/core/coil';
 import { formatNumber, formatQuantity, formatQuantityCompact } from '../../src/quantity';
 import type { BenchState } from '../kit/bench';
@@ -167,6 +167,13 @@ function CoilResults(props: { bench: BenchState; formulas: CoilFormulas; onAnswe
   const items = createMemo(() => (r() ? summaryItems(r()!) : undefined));
   createEffect(() => props.onAnswer(items() && { items: items()!, stale: stale() }));
   const handOff = createMemo(() => (r() ? tankHandOff(r()!.design, r()!.query) : undefined));
+  // The Match bench's link: its code (the Match bench's field table) arrives once the bench is awake.
+  const [matchLinks, setMatchLinks] = createSignal<typeof import('./matchLinks')>();
+  onMount(() => void import('./matchLinks').then((m) => setMatchLinks(() => m), (e: unknown) => console.warn(e)));
+  const matchHref = createMemo(() => {
+    const m = matchLinks();
+    return m && r() && r()!.design.frequency !== undefined ? m.matchLinkFor({ coil: r()!.spec }) : undefined;
+  });
   const plotScale = createMemo(() => {
     const l = d()?.inductance ?? 1e-6;
     return l < 1e-6 ? { scale: 1e9, unit: 'nH' } : l < 1e-3 ? { scale: 1e6, unit: 'µH' } : { scale: 1e3, unit: 'mH' };
@@ -327,6 +334,12 @@ function CoilResults(props: { bench: BenchState; formulas: CoilFormulas; onAnswe
             </Show>
             <Show when={form() === 'multilayer'}>
               <p class="tw-coil-detail">No Q is estimated for a multilayer coil: set the tank’s coil Q from a measurement.</p>
+            </Show>
+            <Show when={matchHref()}>
+              <p>
+                <a id="to-match" href={matchHref()}>Match an antenna and the next stage to it on the Match bench</a>{' '}
+                <span class="tw-coil-detail">({form() === 'solenoid' ? 'carries the winding, so taps and links are found from its geometry' : 'carries its inductance: taps need a single-layer coil'}; tuned to f)</span>
+              </p>
             </Show>
           </Show>
         </section>

@@ -14,7 +14,7 @@
  * a coil handed over, read with the Coil bench's table and offered back as
  * "Back to the coil". That table loads only when a link carries a coil.
  */
-import { createMemo, createSignal, Show, type JSX } from 'solid-js';
+import { createEffect, createMemo, createSignal, Show, type JSX } from 'solid-js';
 // Core modules imported one by one, not through the index: the page then ships only these.
 import type { DesignNote } from '../../src/core/notes';
 import { tankNetlist } from '../../src/core/netlist';
@@ -181,6 +181,24 @@ function TankBenchParts(outer: BenchParts<TankFormulas>) {
     const an = a();
     return an ? collapseNoteOf(an) : undefined;
   });
+  // The Match bench's link with this tank's values: its code (the Match bench's table) is fetched when the tank collapses.
+  const [matchLinks, setMatchLinks] = createSignal<typeof import('./matchLinks')>();
+  createEffect(() => {
+    if (collapse() && !matchLinks()) void import('./matchLinks').then((m) => setMatchLinks(() => m), (e: unknown) => console.warn(e));
+  });
+  const matchHref = createMemo(() => {
+    const m = matchLinks();
+    const t = r()?.tank;
+    const an = a();
+    if (!m || !t || !an || !collapse() || an.mode !== 'parallel') return undefined;
+    return m.matchLinkFor({
+      inductance: t.inductance,
+      capacitance: t.capacitance + (t.coilSelfCapacitance ?? 0),
+      unloadedQ: an.unloadedQ,
+      sourceResistance: t.sourceResistance,
+      loadResistance: t.loadResistance,
+    });
+  });
   const notes = createMemo((): DesignNote[] => {
     const seen = new Set<string>();
     const shown = collapse();
@@ -308,6 +326,9 @@ function TankBenchParts(outer: BenchParts<TankFormulas>) {
           <section class="tank-collapse" id="collapse" aria-labelledby="collapse-title" classList={{ 'tw-result--stale': stale() }}>
             <h3 id="collapse-title">A tap or a link winding is needed</h3>
             <p>{collapse()!.message}</p>
+            <Show when={matchHref()}>
+              <p><a id="to-match" href={matchHref()}>Find the tap, divider, link or L-network on the Match bench</a> (carries this tank’s L, C, unloaded Q, source and load).</p>
+            </Show>
             <p>More on the method page: <a href={MATCHING_HREF}>when the terminations collapse the tank</a>.</p>
           </section>
         </Show>

@@ -3,13 +3,15 @@
  * screen: the links that carry the band's coil to the Coil bench and the
  * tank at mid-band to the Tank bench, each written through the receiving
  * bench's own field table (documents.ts specToSnapshot, fields.ts
- * encodeLink), as the Coil bench hands its coil to the Tank bench.
+ * encodeLink), as the Coil bench hands its coil to the Tank bench; and the
+ * coil with the capacitance across it at mid-band to the Match bench.
  */
 import { specToSnapshot } from '../kit/documents';
 import { encodeLink, getPath, type Choices, type SpecObject } from '../kit/fields';
 import { COIL_PREFIX } from './bandFields';
 import type { BandPlan } from './bandPlan';
 import { COIL_FIELDS } from './coilFields';
+import { matchLinkFor } from './matchLinks';
 import { TANK_FIELDS } from './tankFields';
 
 /** The Coil bench's choices that the Band bench shares (same keys). */
@@ -53,3 +55,14 @@ export function tankLink(plan: BandPlan): string {
   return `/tank/?${encodeLink(TANK_FIELDS, specToSnapshot(TANK_FIELDS, spec, { mode: 'parallel', coilLoss: 'Q', capLoss: 'Q' }, 6))}`;
 }
 
+
+/**
+ * The Match bench's link for the band's coil (wound as the plan winds it,
+ * at mid-band) with everything across it there: the capacitance that tunes it
+ * and the strays. The antenna and the next stage keep the Match bench's own
+ * defaults: the Band bench's source and load are those seen across the tank.
+ */
+export function matchLink(plan: BandPlan): string {
+  const t = plan.selectivity.middle.tank;
+  return matchLinkFor({ coil: plan.coilSpec, capacitance: t.capacitance + (t.coilSelfCapacitance ?? 0), capacitorQ: t.capacitorQ });
+}

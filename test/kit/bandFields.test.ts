@@ -23,7 +23,10 @@ import { planBand, type BandPlan } from '../../components/benches/bandPlan';
 import { trackBand } from '../../components/benches/bandTracking';
 import { curvesOf, ownDialFor, slugFor } from '../../components/benches/bandCurves';
 import { pairsForBand } from '../../components/benches/bandPairs';
-import { coilLink, tankLink } from '../../components/benches/bandLinks';
+import { coilLink, matchLink, tankLink } from '../../components/benches/bandLinks';
+import { MATCH_FIELDS } from '../../components/benches/matchFields';
+import { matchSpecOf } from '../../components/benches/matchPlan';
+import { resolveMatchTank } from '../../src/core/matchTank';
 import { COIL_FIELDS } from '../../components/benches/coilFields';
 import { TANK_FIELDS } from '../../components/benches/tankFields';
 import { inUse, radioCombinations } from '../helpers/fields';
@@ -329,6 +332,25 @@ describe('Core errors land at the field that fills or answers for their path', (
 });
 
 describe('Hand-offs', () => {
+  it('the Match bench reads the coil’s link with no notice: the same turns and the capacitance across it at mid-band (Thomson’s formula)', async () => {
+    const s = stateOf({});
+    const { plan } = await run(s);
+    const href = matchLink(plan!);
+    expect(href.startsWith('/match/?')).toBe(true);
+    const d = decodeLink(MATCH_FIELDS, href.slice('/match/?'.length));
+    expect(d.notices).toEqual([]);
+    const { spec, errors } = await snapshotToSpec(MATCH_FIELDS, { choices: { ...defaultChoices(MATCH_FIELDS), ...d.choices }, texts: { ...defaultSnapshot(MATCH_FIELDS, d.choices).texts, ...d.texts } });
+    expect(errors).toEqual({});
+    const match = matchSpecOf(spec, { ...defaultChoices(MATCH_FIELDS), ...d.choices });
+    const tank = resolveMatchTank(match);
+    expect(tank.coil?.turns).toBe(plan!.coil.turns);
+    // the capacitance carried resonates the band's L at mid-band; the Match bench tunes it with the coil's L at that
+    // frequency (without the wire's internal inductance), so by Thomson's formula f = f_mid √(L_band / L_match)
+    const expected = plan!.selectivity.middle.frequency * Math.sqrt(plan!.design.inductance / tank.inductance);
+    expect(rel(tank.frequency, expected)).toBeLessThan(1e-4);
+    expect(rel(tank.inductance, plan!.design.inductance)).toBeLessThan(0.02);
+  });
+
   it('the Coil bench reads the coil’s link with no notice and winds the same coil', async () => {
     const s = stateOf({ wire: 'swg' });
     const { raw, plan } = await run(s);
