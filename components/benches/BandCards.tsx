@@ -19,6 +19,7 @@ import { NoteList } from '../kit/Note';
 import { ResultRow } from '../kit/ResultRow';
 import type { BandFormulas, BandRun } from './BandBench';
 import { bandText, hz, sayDb, sayQ, sayTurns, signedHz } from './bandPlan';
+import { imageResponse } from './bandImage';
 
 const pf = (c: number) => formatQuantityCompact(c, 'F', 3);
 
@@ -64,6 +65,9 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
   const d = () => p()?.design;
   const sel = () => p()?.selectivity;
   const stale = () => calc.stale();
+  // The image rejection (superhet): a computation of its own, so an IF the core refuses is told at its field.
+  const imageCalc = bench.compute(() => (p() ? { image: imageResponse(p()!) } : undefined));
+  const image = () => imageCalc.result()?.image;
   const linkCode = loadNear('handoff', () => import('./bandLinks'));
   const links = createMemo(() => {
     const m = linkCode.module();
@@ -122,10 +126,10 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
             <table class="tw-table" id="sel-table">
               <thead>
                 <tr><th scope="col">At</th><th scope="col">Frequency</th><th scope="col">Coil Q</th><th scope="col">Unloaded Q</th><th scope="col">Loaded Q</th><th scope="col">Bandwidth</th><th scope="col">Dynamic R</th>
-                  <Show when={p()?.image}><th scope="col">Image rejection</th></Show></tr>
+                  <Show when={image()}><th scope="col">Image rejection</th></Show></tr>
               </thead>
               <tbody>
-                <For each={sel() ? ([['low', sel()!.low, p()!.image?.low], ['middle', sel()!.middle, p()!.image?.middle], ['high', sel()!.high, p()!.image?.high]] as const) : []}>
+                <For each={sel() ? ([['low', sel()!.low, image()?.low], ['middle', sel()!.middle, image()?.middle], ['high', sel()!.high, image()?.high]] as const) : []}>
                   {([name, pt, im]) => (
                     <tr id={`sel-${name}`}>
                       <th scope="row">{name}</th>
@@ -143,7 +147,7 @@ export default function BandCards(props: { bench: BenchState; formulas: BandForm
             </table>
           </div>
           <Formula math={f.selectivity} source="Pozar, Microwave Engineering (loaded Q); coil Q from the Coil bench’s loss model (Butterworth 1922)" validity="tank analysed at each frequency with the coil’s Q there; source and load across the tank" />
-          <Show when={p()?.image}>
+          <Show when={image()}>
             <Formula math={f.image} source="the loaded tank’s own impedance at the image (one tuned circuit ahead of the mixer)" validity="one tuned circuit: an RF stage with its own tank adds its rejection in dB" />
           </Show>
         </section>

@@ -95,7 +95,7 @@ export function BandPlots(props: { bench: BenchState; calc: Computed<BandRun> })
         y2Label="Bandwidth (kHz)"
         stale={stale()}
       />
-      <Show when={p()!.image}>
+      <Show when={p()!.superhet}>
         <Plot
           id="plot-image"
           caption="Image rejection of the signal tank across the band, dB below its response on tune."

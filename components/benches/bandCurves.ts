@@ -1,6 +1,6 @@
 /**
- * What the Band bench draws and its optional parts, loaded with the cards'
- * chunk (BandCards.tsx), not with the answer: the dial laws (straight-line
+ * What the Band bench draws and its optional parts, loaded when their place
+ * comes near (BandExtras.tsx), not with the answer: the dial laws (straight-line
  * capacitance and straight-line frequency plates, and the user's own plate
  * table), the selectivity and image-rejection curves across the band, and
  * tuning with a slug. Pure: no Solid, no DOM; tests call them in Node.
@@ -15,7 +15,8 @@ import { slugTuning, type SlugTuning } from '../../src/core/slug';
 import type { BandSelectivity } from '../../src/core/band';
 import { formatQuantityCompact } from '../../src/quantity';
 import { getPath, type Choices, type SpecObject } from '../kit/fields';
-import { bandDesign, imageAt, num, type BandPlan } from './bandPlan';
+import { bandDesign, num, type BandPlan } from './bandPlan';
+import { imageAt } from './bandImage';
 
 /** Points of the dial law curves. */
 export const DIAL_POINTS = 61;

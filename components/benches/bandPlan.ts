@@ -6,9 +6,9 @@
  *   → bandSelectivity (the coil wound once by designCoil for that L at
  *     mid-band, its Q across the band, the tank's unloaded and loaded Q,
  *     bandwidth and dynamic resistance at each frequency)
- *   → the image rejection of the signal tank (the core's imageRejection) for a superhet
  *
- * What the plots draw (the dial laws, the selectivity and image curves) and
+ * The image rejection (the core's imageRejection, for a superhet), what the
+ * plots draw (the dial laws, the selectivity and image curves) and
  * the optional parts (a tuning slug, the user's plate table) are in
  * bandCurves.ts, which only the cards' chunk loads: each point of the
  * selectivity is a tank analysis, and a phone should not pay for a plot
@@ -30,7 +30,7 @@ import { designCoil, type DesignCoilResult, type DesignCoilSpec } from '../../sr
 import { DesignError, isDesignError, withinSpec } from '../../src/core/errors';
 import type { DesignNote } from '../../src/core/notes';
 import type { TankInput } from '../../src/core/tankModel';
-import { imageRejection, type OscillatorSide } from '../../src/core/image';
+import type { OscillatorSide } from '../../src/core/image';
 import { formatNumber, formatQuantity, formatQuantityCompact, parseQuantityRange } from '../../src/quantity';
 import { getPath, type Choices, type SpecObject } from '../kit/fields';
 import { capacitorKindRange, COIL_PREFIX } from './bandFields';
@@ -75,19 +75,6 @@ export interface Superhet {
   oscillatorSide: OscillatorSide;
 }
 
-/** The core's image rejection of the tank tuned to f (its own loss figures at f): the image and how far below f's response, dB. */
-export function imageAt(tank: TankInput, f: number, superhet: Superhet): { image: number; rejection: number } {
-  const r = imageRejection({ tank, signalFrequency: f, ...superhet });
-  return { image: r.imageFrequency, rejection: r.rejection };
-}
-
-export interface ImageResponse {
-  /** Image frequency and rejection (dB) at the band's low, middle and high frequency. */
-  low: { image: number; rejection: number };
-  middle: { image: number; rejection: number };
-  high: { image: number; rejection: number };
-}
-
 export interface BandPlan {
   design: BandDesign;
   /** The coil as designCoil winds it for the band's L at mid-band. */
@@ -96,8 +83,6 @@ export interface BandPlan {
   coilSpec: DesignCoilSpec;
   /** Selectivity at the band's low, middle and high frequency (its curve: `selectivityAt`). */
   selectivity: BandSelectivity;
-  /** Superhet only: the signal tank's response at the image. */
-  image?: ImageResponse;
   /** The selectivity at this many points across the band (the plotted curve; a tank analysis per point). */
   selectivityAt: (points: number) => BandSelectivity;
   /** The superhet's IF and oscillator side, when the bench has one. */
@@ -160,11 +145,9 @@ export function planBand(raw: SpecObject, choices: Choices): BandPlan {
   const side = superhetSide(choices);
   const ifreq = num(raw, 'intermediateFrequency');
   const superhet: Superhet | undefined = side === undefined || ifreq === undefined ? undefined : { intermediateFrequency: ifreq, oscillatorSide: side };
-  const point = (p: BandSelectivity['low'], sh: Superhet) => imageAt(p.tank, p.frequency, sh);
-  const image = superhet && { low: point(selectivity.low, superhet), middle: point(selectivity.middle, superhet), high: point(selectivity.high, superhet) };
   const seen = new Set<string>();
   return {
-    design, coil, coilSpec, selectivity, image, selectivityAt, superhet,
+    design, coil, coilSpec, selectivity, selectivityAt, superhet,
     notes: [...design.notes, ...selectivity.notes].filter((n) => (seen.has(n.message) ? false : (seen.add(n.message), true))),
   };
 }
