@@ -142,8 +142,8 @@ export default function MatchCards(props: { bench: BenchState; formulas: MatchFo
 
       <div class="tw-note tw-note--caution match-caution" role="note" id="match-caution">
         <strong class="tw-note-label">Caution:</strong> a receiver front end works at microwatts, but the same tap or link on a
-        transmitter’s tank carries high RF voltage and current: the top of a loaded Q of 12 at 100 W stands hundreds of volts.
-        Check the parts’ ratings on the Tank bench, follow local codes and licensed practice, and <a href="/cautions/">read the cautions</a>.
+        transmitter’s tank does not: 100 W into a tank loaded to a few kilohms puts hundreds of volts on its top (V = √(PR)), and the
+        circulating current heats the coil. Check the parts’ ratings on the Tank bench, follow local codes and licensed practice, and <a href="/cautions/">read the cautions</a>.
       </div>
     </>
   );

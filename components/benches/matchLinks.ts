@@ -23,13 +23,13 @@ export interface MatchHandOff {
   coil?: DesignCoilSpec;
   /** The coil's inductance, H, when no single-layer coil is given (or the coil spec gives its turns only). */
   inductance?: number;
-  /** All the capacitance across the coil, F. */
+  /** All the capacitance across the coil, F: the capacitor, trimmer, strays and the coil's own self-capacitance together. */
   capacitance?: number;
   /** The frequency to tune the tank to, Hz, when the capacitance is not known (default: the coil spec's working frequency). */
   frequency?: number;
-  /** The tank's unloaded Q (blank on the bench: the coil's Q from its loss model). */
+  /** The tank's unloaded Q, coil and capacitor together (1/Q_u = 1/Q_coil + 1/Q_C); omitted, a single-layer coil's Q comes from its loss model. Needed for any other coil (else the bench's 150 stands). */
   unloadedQ?: number;
-  /** The capacitor's Q. */
+  /** The capacitor's Q, used with a single-layer coil's own Q when `unloadedQ` is omitted. */
   capacitorQ?: number;
   /** Source (antenna) resistance, Ω. */
   sourceResistance?: number;

@@ -241,11 +241,11 @@ export const mm = (x: number) => `${Number((x * 1e3).toPrecision(3))} mm`;
 export function buildText(o: BuiltOption): string {
   switch (o.kind) {
     case 'tap':
-      return `tap ${sayTurns(o.tap.practicalTapTurns)} turns from the cold end`;
+      return `tap ${sayTurns(o.tap.practicalTapTurns)} turns from the cold end (exactly ${o.tap.tapTurns.toFixed(2)})`;
     case 'capacitiveDivider':
       return `C1 ${pf(o.divider.upperCapacitance)} (top to joint), C2 ${pf(o.divider.lowerCapacitance)} (joint to ground)`;
     case 'link':
-      return `${sayTurns(o.link.practicalTurns)} turn${o.link.practicalTurns === 1 ? '' : 's'}, ${mm(o.link.diameter)} across, ${o.link.position === 0 ? 'over the cold end' : `${mm(o.link.position)} from the cold end`}`;
+      return `${sayTurns(o.link.practicalTurns)} turn${o.link.practicalTurns === 1 ? '' : 's'}, ${mm(o.link.diameter)} across, ${o.link.position === 0 ? 'over the cold end' : `${mm(o.link.position)} from the cold end`}; k = ${o.link.couplingCoefficient.toFixed(2)}`;
     case 'lowPassL':
       return `series L ${henry(o.network.seriesInductance as number)}; tank capacitor ${pf(o.network.tankCapacitance)}`;
     case 'highPassL':
