@@ -328,7 +328,7 @@ describe('The hand-off link', () => {
     const { d, spec } = await open(matchLinkFor({ coil, capacitance: 150e-12, unloadedQ: 180, sourceResistance: 50, loadResistance: 2200 }));
     expect(d.choices).toMatchObject({ give: 'N', wind: 'pitch', wire: 'swg', swg: '20', enamel: 'bare', tune: 'C' });
     expect(spec.coil).toMatchObject({ turns: 14.5, pitch: 2e-3, leadLength: 0, temperature: 20 });
-    expect(rel(spec.coil!.diameter as number, 25e-3)).toBeLessThan(1e-6);
+    expect(rel((spec.coil as { diameter: number }).diameter, 25e-3)).toBeLessThan(1e-6);
     expect(spec).toMatchObject({ unloadedQ: 180, sourceResistance: 50, loadResistance: 2200 });
     expect(rel(spec.capacitance, 150e-12)).toBeLessThan(1e-6);
     expect(designCoil({ ...spec.coil! } as DesignCoilSpec).turns).toBe(14.5);
