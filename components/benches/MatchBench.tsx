@@ -38,8 +38,6 @@ export default inParts('match', MatchBenchParts);
 function MatchBenchParts(outer: BenchParts<MatchFormulas>) {
   const { bench, notices, awake } = createWakingBench(MATCH_FIELDS, outer.early);
   const [answer, setAnswer] = createSignal<DockedAnswer>();
-  const coil = MATCH_GROUPS.coil;
-  const split = coil.indexOf('wire');
 
   return (
     <div class="tw-bench match-bench" data-bench="match" data-awake={awake() ? '' : undefined}>
@@ -48,10 +46,7 @@ function MatchBenchParts(outer: BenchParts<MatchFormulas>) {
         <fieldset class="match-group">
           <legend>Coil</legend>
           <Later>
-            <Fields bench={bench} names={coil.slice(0, split)} />
-          </Later>
-          <Later>
-            <Fields bench={bench} names={coil.slice(split)} />
+            <Fields bench={bench} names={MATCH_GROUPS.coil} />
             <Show when={bench.choice('coilBy') === 'L'}>
               <p class="tw-field-hint" id="coil-why">
                 A tap or a link is worked out from a single-layer coil’s turns (Nagaoka and Rosa, Maxwell’s formula): a toroid’s or a
@@ -60,6 +55,14 @@ function MatchBenchParts(outer: BenchParts<MatchFormulas>) {
             </Show>
           </Later>
         </fieldset>
+        <Show when={bench.choice('coilBy') === 'solenoid'}>
+          <fieldset class="match-group">
+            <legend>Wire</legend>
+            <Later>
+              <Fields bench={bench} names={MATCH_GROUPS.wire} />
+            </Later>
+          </fieldset>
+        </Show>
         <Later>
           <fieldset class="match-group">
             <legend>Tank</legend>

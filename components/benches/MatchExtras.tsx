@@ -13,7 +13,7 @@ import type { BenchState } from '../kit/bench';
 import { Plot } from '../kit/Plot';
 import { OPTION_NAMES } from './matchFields';
 import { returnLossCurves } from './matchCurves';
-import { mm, planAnswer, planOption, sayDb, sayTurns, type BuiltOption } from './matchPlan';
+import { mm, planAnswer, planOption, sayDb, sayTurns, turnsText, type BuiltOption } from './matchPlan';
 
 const tickHz = (x: number | null) => (x == null || !Number.isFinite(x) ? '' : formatQuantityCompact(x, 'Hz', 4));
 
@@ -149,9 +149,9 @@ function CoilSketch(props: { plan: ReturnType<typeof planAnswer>; option: BuiltO
   });
   const marks = createMemo((): Mark[] => {
     const m: Mark[] = [];
-    if (props.option.kind === 'tap') m.push({ turns: props.option.tap.practicalTapTurns, name: 'antenna', text: `antenna tap, ${sayTurns(props.option.tap.practicalTapTurns)} turns` });
+    if (props.option.kind === 'tap') m.push({ turns: props.option.tap.practicalTapTurns, name: 'antenna', text: `antenna tap, ${turnsText(props.option.tap.practicalTapTurns)}` });
     const lt = props.plan.design.load?.tap;
-    if (lt) m.push({ turns: lt.practicalTapTurns, name: 'load', text: `load tap, ${sayTurns(lt.practicalTapTurns)} turns` });
+    if (lt) m.push({ turns: lt.practicalTapTurns, name: 'load', text: `load tap, ${turnsText(lt.practicalTapTurns)}` });
     return m.sort((a, b) => a.turns - b.turns);
   });
   /** The link's turns in coil turns from the cold end (its axial position over the coil's pitch). */
@@ -173,7 +173,7 @@ function CoilSketch(props: { plan: ReturnType<typeof planAnswer>; option: BuiltO
   const describe = () => [
     `${sayTurns(turns())} turns${coil()?.windingLength === undefined ? '' : `, ${mm(coil()!.windingLength as number)} long`}; the cold end (to ground) on the left, the top of the tank on the right.`,
     ...marks().map((k) => `${k.text[0].toUpperCase()}${k.text.slice(1)} from the cold end.`),
-    ...(props.option.kind === 'link' ? [`Link: ${sayTurns(props.option.link.practicalTurns)} turns, ${mm(props.option.link.diameter)} across, ${props.option.link.position === 0 ? 'over the cold-end turn' : `${mm(props.option.link.position)} from the cold-end turn`}.`] : []),
+    ...(props.option.kind === 'link' ? [`Link: ${turnsText(props.option.link.practicalTurns)}, ${mm(props.option.link.diameter)} across, ${props.option.link.position === 0 ? 'over the cold-end turn' : `${mm(props.option.link.position)} from the cold-end turn`}.`] : []),
     ...(props.option.kind === 'capacitiveDivider' || props.option.kind === 'lowPassL' || props.option.kind === 'highPassL' ? ['The antenna does not connect to the coil: it goes through the parts listed above.'] : []),
   ];
   return (
@@ -197,7 +197,7 @@ function CoilSketch(props: { plan: ReturnType<typeof planAnswer>; option: BuiltO
             {(n) => <ellipse class="sk-link" cx={x(n) + slant() / 2} cy={(TOP + BOTTOM) / 2} rx={Math.max(3, slant())} ry={(BOTTOM - TOP) / 2 + 8} />}
           </For>
           <Show when={linkTurns().length > 0}>
-            <text class="sk-label sk-link-label" x={x(linkTurns()[0])} y={BOTTOM + 24}>link, {sayTurns((props.option as Extract<BuiltOption, { kind: 'link' }>).link.practicalTurns)} turns</text>
+            <text class="sk-label sk-link-label" x={x(linkTurns()[0])} y={BOTTOM + 24}>link, {turnsText((props.option as Extract<BuiltOption, { kind: 'link' }>).link.practicalTurns)}</text>
           </Show>
           <For each={marks()}>
             {(k, i) => (

@@ -18,7 +18,7 @@ import { NoteList } from '../kit/Note';
 import { ResultRow } from '../kit/ResultRow';
 import type { MatchFormulas } from './MatchBench';
 import { OPTION_NAMES } from './matchFields';
-import { buildText, henry, hz, mm, ohm, OPTION_KINDS, pf, planOption, sayDb, sayQ, sayTurns, turnFigures, type BuiltOption } from './matchPlan';
+import { buildText, henry, hz, mm, ohm, OPTION_KINDS, pf, planOption, sayDb, sayQ, sayTurns, turnFigures, turnsText, type BuiltOption } from './matchPlan';
 
 type Option<K extends MatchOptionKind> = BuiltOption & { kind: K };
 
@@ -127,7 +127,7 @@ function TapCard(props: { bench: BenchState; formula: JSX.Element }) {
         return (
           <ResultRow id="out-tap" label="Antenna tap, turns from the cold end (nearest half turn)" value={t().practicalTapTurns} significant={turnFigures(t().practicalTapTurns)} stale={stale()} primary>
             <p class="tw-formula-meta" id="out-tap-detail">
-              Exactly {t().tapTurns.toFixed(3)} turns present the {ohm(o().circuit.sourceResistance)} antenna as wanted; {sayTurns(t().practicalTapTurns)} turns step it up
+              Exactly {t().tapTurns.toFixed(3)} turns present the {ohm(o().circuit.sourceResistance)} antenna as wanted; {turnsText(t().practicalTapTurns)} step it up
               {' '}{t().stepUp.toFixed(3)}× to {ohm(t().presentedResistance)}. Sections at the tap: L₁ {henry(t().lowerInductance)}, L₂ {henry(t().upperInductance)},
               {' '}M {henry(t().mutualInductance)}, k = {t().couplingCoefficient.toFixed(3)}, leakage {henry(t().leakageInductance)}.
             </p>

@@ -180,7 +180,8 @@ export const MATCH_FIELDS: FieldTable = defineFields([
 
 /** The fields of each group, in the order the bench lays them out. */
 export const MATCH_GROUPS = {
-  coil: ['coilBy', 'Lc', ...COIL_KEYS],
+  coil: ['coilBy', 'Lc', ...COIL_KEYS.slice(0, COIL_KEYS.indexOf('wire'))],
+  wire: COIL_KEYS.slice(COIL_KEYS.indexOf('wire')),
   tank: ['tune', 'C', 'f', 'Qu', 'capQ'],
   terminations: ['Rs', 'Rload', 'loadAt', 'loadTap'],
   goal: ['goal', 'QL', 'split'],

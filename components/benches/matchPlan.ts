@@ -220,6 +220,8 @@ export const OPTION_KINDS = MATCH_OPTION_KINDS;
 
 /** Turns as wound: "4", "3.5". */
 export const sayTurns = (n: number) => String(Number(n.toFixed(1)));
+/** Turns with their noun: "1 turn", "0.5 turns", "4 turns". */
+export const turnsText = (n: number) => `${sayTurns(n)} turn${sayTurns(n) === '1' ? '' : 's'}`;
 /** The significant figures a result row needs to show turns as sayTurns does ("4", "14.5"). */
 export const turnFigures = (n: number | undefined) => (n === undefined ? 3 : sayTurns(n).replace('.', '').length);
 /** A Q as people say it: whole numbers from 10 up, two figures below. */
@@ -241,11 +243,11 @@ export const mm = (x: number) => `${Number((x * 1e3).toPrecision(3))} mm`;
 export function buildText(o: BuiltOption): string {
   switch (o.kind) {
     case 'tap':
-      return `tap ${sayTurns(o.tap.practicalTapTurns)} turns from the cold end (exactly ${o.tap.tapTurns.toFixed(2)})`;
+      return `tap ${turnsText(o.tap.practicalTapTurns)} from the cold end (exactly ${o.tap.tapTurns.toFixed(2)})`;
     case 'capacitiveDivider':
       return `C1 ${pf(o.divider.upperCapacitance)} (top to joint), C2 ${pf(o.divider.lowerCapacitance)} (joint to ground)`;
     case 'link':
-      return `${sayTurns(o.link.practicalTurns)} turn${o.link.practicalTurns === 1 ? '' : 's'}, ${mm(o.link.diameter)} across, ${o.link.position === 0 ? 'over the cold end' : `${mm(o.link.position)} from the cold end`}; k = ${o.link.couplingCoefficient.toFixed(2)}`;
+      return `${turnsText(o.link.practicalTurns)}, ${mm(o.link.diameter)} across, ${o.link.position === 0 ? 'over the cold end' : `${mm(o.link.position)} from the cold end`}; k = ${o.link.couplingCoefficient.toFixed(2)}`;
     case 'lowPassL':
       return `series L ${henry(o.network.seriesInductance as number)}; tank capacitor ${pf(o.network.tankCapacitance)}`;
     case 'highPassL':
