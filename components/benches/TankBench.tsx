@@ -191,13 +191,18 @@ function TankBenchParts(outer: BenchParts<TankFormulas>) {
     const t = r()?.tank;
     const an = a();
     if (!m || !t || !an || !collapse() || an.mode !== 'parallel') return undefined;
-    return m.matchLinkFor({
+    const href = m.matchLinkFor({
       inductance: t.inductance,
       capacitance: t.capacitance + (t.coilSelfCapacitance ?? 0),
       unloadedQ: an.unloadedQ,
       sourceResistance: t.sourceResistance,
       loadResistance: t.loadResistance,
     });
+    if (t.loadResistance !== undefined) return href;
+    // No load here: none there either (a blank optional field is written empty, not left to its default).
+    const params = new URLSearchParams(href.slice(href.indexOf('?') + 1));
+    params.set('Rload', '');
+    return `/match/?${params.toString()}`;
   });
   const notes = createMemo((): DesignNote[] => {
     const seen = new Set<string>();

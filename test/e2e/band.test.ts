@@ -94,7 +94,7 @@ describe.runIf(browserAvailable())('Band bench in Chromium', () => {
     expect(errors).toEqual([]);
   });
 
-  it('hands the coil to the Coil bench (same turns) and the tank to the Tank bench (resonant at mid-band)', async () => {
+  it('hands the coil to the Coil bench (same turns), the tank to the Tank bench (resonant at mid-band) and both to the Match bench', async () => {
     const { page, errors } = await openPage(env.browser, `${env.site.origin}/band/`);
     await hydrated(page);
     const turns = await valueOf(page, 'out-turns');
@@ -105,6 +105,7 @@ describe.runIf(browserAvailable())('Band bench in Chromium', () => {
     await toCoil.waitFor();
     const coilHref = (await toCoil.getAttribute('href'))!;
     const tankHref = (await page.locator('#to-tank').getAttribute('href'))!;
+    const matchHref = (await page.locator('#to-match').getAttribute('href'))!;
 
     const { page: coil, errors: coilErrors } = await openPage(env.browser, `${env.site.origin}${coilHref}`);
     await hydrated(coil);
@@ -124,7 +125,13 @@ describe.runIf(browserAvailable())('Band bench in Chromium', () => {
     expect(rel(carried, mid)).toBeLessThan(1e-4);
     // and the Tank bench finds its resonance there (loss moves it by about 1/Q²)
     await expect.poll(async () => rel(await valueOf(tank, 'out-f'), mid)).toBeLessThan(1e-3);
-    expect([...errors, ...coilErrors, ...tankErrors]).toEqual([]);
+    // and the Match bench winds the same coil, tuned by what is across it to mid-band within the wire's internal inductance (about 1 %)
+    const { page: match, errors: matchErrors } = await openPage(env.browser, `${env.site.origin}${matchHref}`);
+    await hydrated(match);
+    expect(await match.locator('.tw-link-notices').count()).toBe(0);
+    await expect.poll(() => valueOf(match, 'out-turns')).toBe(turns);
+    expect(rel(await valueOf(match, 'out-f0'), mid)).toBeLessThan(0.02);
+    expect([...errors, ...coilErrors, ...tankErrors, ...matchErrors]).toEqual([]);
   });
 
   it('a tuning slug and the capacitor’s own plates: the band the slug reaches, the plates on the tuning curve; a bad table told at its field while the answer stands', async () => {

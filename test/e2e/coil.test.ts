@@ -430,4 +430,19 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
     expect(errors).toEqual([]);
     expect(tank.errors).toEqual([]);
   });
+
+  it('hands a single-layer coil to the Match bench, which winds the same turns and tunes it to the coil’s frequency', async () => {
+    const query = 'form=solenoid&give=N&N=15&dia=mean&D=25mm&wind=pitch&p=2mm&wire=mm&wd=1mm&enamel=bare&f=6MHz&lead=10mm&T=20';
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/coil/?${query}`);
+    await hydrated(page);
+    const toMatch = page.locator('#to-match');
+    await toMatch.waitFor();
+    const match = await openPage(env.browser, `${env.site.origin}${(await toMatch.getAttribute('href'))!}`);
+    await hydrated(match.page);
+    expect(await match.page.locator('.tw-link-notices').count()).toBe(0);
+    await expect.poll(() => valueOf(match.page, 'out-turns')).toBe(15);
+    // the Match bench tunes the coil to the frequency it was handed (Thomson's formula with its own L and C)
+    expect(rel(await valueOf(match.page, 'out-f0'), 6e6)).toBeLessThan(1e-3);
+    expect([...errors, ...match.errors]).toEqual([]);
+  });
 });

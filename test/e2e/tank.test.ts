@@ -159,8 +159,16 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     expect(await summaryValue(page, 'sum-ql')).toBeLessThan(0.3);
     // the note is shown once, not repeated in the notes below
     expect(await page.locator('.tw-notes').getByText('collapse the tank').count()).toBe(0);
-    // the link leads to a section that exists
-    const href = (await box.locator('a').getAttribute('href'))!;
+    // the Match bench link carries the tank: opened, it shows the same collapse straight across (no notices)
+    const toMatch = box.locator('#to-match');
+    await toMatch.waitFor();
+    const match = await openPage(env.browser, `${env.site.origin}${(await toMatch.getAttribute('href'))!}`);
+    await hydrated(match.page);
+    expect(await match.page.locator('.tw-link-notices').count()).toBe(0);
+    await expect.poll(async () => rel(await summaryValue(match.page, 'sum-direct'), await summaryValue(page, 'sum-ql'))).toBeLessThan(0.01);
+    expect(match.errors).toEqual([]);
+    // the method page's link leads to a section that exists
+    const href = (await box.locator('a[href^="/methods/"]').getAttribute('href'))!;
     expect(href).toMatch(/^\/methods\/tank\/#/);
     const method = await openPage(env.browser, `${env.site.origin}${href}`);
     expect(await method.page.locator(`[id="${href.split('#')[1]}"]`).count()).toBe(1);
