@@ -126,8 +126,8 @@ interface Mark {
 }
 
 const W = 420;
-const X0 = 56;
-const X1 = 388;
+const X0 = 50;
+const X1 = 378;
 const TOP = 64;
 const BOTTOM = 100;
 
@@ -167,8 +167,12 @@ function CoilSketch(props: { plan: ReturnType<typeof planAnswer>; option: BuiltO
     for (let t = 0; t <= n; t += every) out.push(t);
     return out;
   };
-  /** Where the i-th tap's label sits below the coil (a row lower when a link's label takes the first). */
-  const below = (i: number) => BOTTOM + (linkTurns().length > 0 ? 44 : 24) + 20 * i;
+  /**
+   * Where the i-th tap's label sits below the coil (taps counted from the cold end): the tap nearest the top
+   * on the first row, each one nearer the cold end a row lower, so no lead crosses a label; a row lower
+   * still when a link's label takes the first.
+   */
+  const below = (i: number) => BOTTOM + (linkTurns().length > 0 ? 44 : 24) + 20 * (marks().length - 1 - i);
   const slant = () => Math.min(8, (X1 - X0) / turns() / 2);
   const describe = () => [
     `${sayTurns(turns())} turns${coil()?.windingLength === undefined ? '' : `, ${mm(coil()!.windingLength as number)} long`}; the cold end (to ground) on the left, the top of the tank on the right.`,
@@ -197,7 +201,7 @@ function CoilSketch(props: { plan: ReturnType<typeof planAnswer>; option: BuiltO
             {(n) => <ellipse class="sk-link" cx={x(n) + slant() / 2} cy={(TOP + BOTTOM) / 2} rx={Math.max(3, slant())} ry={(BOTTOM - TOP) / 2 + 8} />}
           </For>
           <Show when={linkTurns().length > 0}>
-            <text class="sk-label sk-link-label" x={x(linkTurns()[0])} y={BOTTOM + 24}>link, {turnsText((props.option as Extract<BuiltOption, { kind: 'link' }>).link.practicalTurns)}</text>
+            <text class="sk-label sk-link-label" x={Math.max(x(linkTurns()[0]), X0 + 16)} y={BOTTOM + 24}>link, {turnsText((props.option as Extract<BuiltOption, { kind: 'link' }>).link.practicalTurns)}</text>
           </Show>
           <For each={marks()}>
             {(k, i) => (

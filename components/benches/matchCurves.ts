@@ -50,7 +50,7 @@ export function directCircuit(design: MatchDesign, sourceResistance: number): Ma
 
 /**
  * The return-loss curves for the bench's values: every option that can be
- * built and the straight-across tank, over f₀ ± 4 of the widest option's
+ * built and the straight-across tank, over f₀ ± 2.5 of the widest option's
  * bandwidths (at most ± f₀/2), CURVE_POINTS points each.
  * @throws DesignError with a spec path the table routes (as planAnswer)
  */
@@ -72,7 +72,7 @@ export function returnLossCurves(raw: SpecObject, choices: Choices): ReturnLossC
   const d = design as MatchDesign;
   const f0 = d.tank.frequency;
   const widest = Math.max(f0 / 50, ...built.map((o) => o.response.bandwidth));
-  const half = Math.min(0.5 * f0, 4 * widest);
+  const half = Math.min(0.5 * f0, 2.5 * widest);
   const sweep = { start: f0 - half, stop: f0 + half, points: CURVE_POINTS, spacing: 'linear' as const };
   const curves: ReturnLossCurve[] = built.map((o) => ({ kind: o.kind, returnLoss: sweepMatchCircuit(o.circuit, sweep).returnLoss }));
   const direct = sweepMatchCircuit(directCircuit(d, spec.sourceResistance), sweep);
