@@ -1,26 +1,45 @@
 /**
  * The Match bench's parts loaded when their place comes near the screen
- * (MatchCards.tsx): the return-loss plot with its sweeps (matchCurves.ts),
+ * (MatchCards.tsx): the return-loss plot with its sweeps (matchCurves.ts,
+ * worked out when the browser is idle),
  * and the option to build, drawn on its coil (where the taps and the link go,
  * turns counted from the cold end; our own simple sketch) with its SPICE
  * netlist (the core's matchNetlist) to copy or download.
  */
-import { createEffect, createMemo, createSignal, For, onCleanup, Show } from 'solid-js';
+import { createDeferred, createEffect, createMemo, createSignal, For, onCleanup, Show } from 'solid-js';
+import { isDesignError } from '../../src/core/errors';
 import type { MatchOptionKind } from '../../src/core/matching';
 import { matchNetlist } from '../../src/core/matchNetlist';
 import { formatQuantityCompact } from '../../src/quantity';
 import type { BenchState } from '../kit/bench';
 import { Plot } from '../kit/Plot';
 import { OPTION_NAMES } from './matchFields';
-import { returnLossCurves } from './matchCurves';
+import { returnLossCurves, type ReturnLossCurves } from './matchCurves';
 import { mm, planAnswer, planOption, sayDb, sayTurns, turnsText, type BuiltOption } from './matchPlan';
 
 const tickHz = (x: number | null) => (x == null || !Number.isFinite(x) ? '' : formatQuantityCompact(x, 'Hz', 4));
 
-/** Return loss at the antenna against frequency: one curve per option, and the antenna straight across (dashed). */
+/**
+ * Return loss at the antenna against frequency: one curve per option, and the
+ * antenna straight across (dashed). The sweeps (every option over 201 points)
+ * are the heaviest work on the bench, so the curves follow the typing when
+ * the browser is idle (Solid's createDeferred), marked stale until they have;
+ * a value the core refuses leaves the last curves, stale (its field says why).
+ */
 export function ReturnLossPlot(props: { bench: BenchState }) {
-  const calc = props.bench.compute((raw, choices) => returnLossCurves(raw, choices));
-  const c = () => calc.result();
+  const values = createDeferred(() => ({ raw: props.bench.spec(), choices: props.bench.choices() }), { timeoutMs: 300 });
+  const run = createMemo<{ curves?: ReturnLossCurves; ok: boolean }>((last) => {
+    const { raw, choices } = values();
+    if (!raw) return { curves: last?.curves, ok: false };
+    try {
+      return { curves: returnLossCurves(raw, choices), ok: true };
+    } catch (e) {
+      if (!isDesignError(e)) console.error(e);
+      return { curves: last?.curves, ok: false };
+    }
+  });
+  const c = () => run().curves;
+  const stale = () => !run().ok || values().raw !== props.bench.spec();
   return (
     <Show when={c()}>
       <Plot
@@ -38,7 +57,7 @@ export function ReturnLossPlot(props: { bench: BenchState }) {
         }))}
         yLabel="Return loss (dB)"
         markers={[{ x: c()!.frequency, label: 'f₀' }]}
-        stale={calc.stale()}
+        stale={stale()}
       />
     </Show>
   );

@@ -130,6 +130,12 @@ describe.runIf(browserAvailable())('Match bench in Chromium', () => {
     await page.locator('#plot-part').scrollIntoViewIfNeeded();
     await expect.poll(() => page.locator('#plot-rl canvas').count(), { timeout: 10_000 }).toBeGreaterThan(0);
     expect(await page.locator('#plot-rl').textContent()).toMatch(/No match/);
+    // the curves follow what is typed (once the browser is idle): more capacitance, a lower f₀, a lower sweep
+    const first = Number(await page.locator('#plot-rl').getAttribute('data-x-first'));
+    await retype(page, 'C', '150p');
+    await expect.poll(async () => Number(await page.locator('#plot-rl').getAttribute('data-x-first'))).toBeLessThan(first);
+    await expect.poll(() => page.locator('#plot-rl').getAttribute('class')).not.toContain('tw-result--stale');
+    await retype(page, 'C', '100p');
     await page.locator('#build-part').scrollIntoViewIfNeeded();
     await expect.poll(() => page.locator('#netlist').count()).toBe(1);
     const netlist = (await page.locator('#netlist').textContent())!;
