@@ -1,8 +1,9 @@
 /**
  * The Match bench's answer, a chunk of its own (MatchBench.tsx loads it as
- * the bench hydrates): the tank, then the plan (matchPlan's planAnswer: the
- * first option that meets the goal, usually the tap), the summary and the
- * cards (their own chunk), each in a task of its own. The summary's first figures also go to the answer dock.
+ * the bench hydrates): the core warmed up, then the plan (matchPlan's
+ * planAnswer: the first option that meets the goal, usually the tap), the
+ * summary and the cards (their own chunk), each in a task of its own. The
+ * summary's first figures also go to the answer dock.
  */
 import { createEffect, createMemo, lazy, Show, untrack } from 'solid-js';
 import type { MatchSpec } from '../../src/core/matching';
