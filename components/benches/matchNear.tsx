@@ -6,13 +6,18 @@
  */
 import { createSignal, onCleanup, onMount, Show, type Accessor, type JSX } from 'solid-js';
 
-/** How far below the screen a place counts as near. */
-const NEAR = '300px 0px';
+/**
+ * Where a place counts as near: up to 300 px below the screen, or anywhere
+ * above it. A place flung past between two frames is never seen inside a
+ * band around the screen (the observer only reports changes), so one the
+ * reader has scrolled past counts as reached.
+ */
+const NEAR = '100000px 0px 300px 0px';
 
 /**
- * A module loaded once the element with this id comes near the screen (or at
- * once where IntersectionObserver is missing); undefined until then, and
- * `failed` when the load did not succeed.
+ * A module loaded once the element with this id comes near the screen or is
+ * scrolled past (at once where IntersectionObserver is missing); undefined
+ * until then, and `failed` when the load did not succeed.
  */
 export function whenNear<T>(id: string, load: () => Promise<T>): { module: Accessor<T | undefined>; failed: Accessor<boolean> } {
   const [module, setModule] = createSignal<T>();

@@ -153,6 +153,14 @@ describe.runIf(browserAvailable())('Match bench in Chromium', () => {
     expect(errors).toEqual([]);
   });
 
+  it('a reader who flings past the options, the plot and the netlist to the end of the page still gets them', async () => {
+    const { page, errors } = await openPage(env.browser, `${env.site.origin}/match/`);
+    await hydrated(page);
+    await page.evaluate(() => window.scrollTo(0, document.documentElement.scrollHeight));
+    for (const id of ['options-table', 'card-tap', 'plot-rl', 'netlist']) await page.locator(`#${id}`).waitFor({ state: 'attached' });
+    expect(errors).toEqual([]);
+  });
+
   it('a coil from the Coil bench winds the same turns here', async () => {
     const coil: DesignCoilSpec = { ...COIL, inductance: 2.2e-6, frequency: 14.2e6 };
     const { page: coilPage, errors: coilErrors } = await openPage(env.browser, `${env.site.origin}/coil/?${encodeLink(COIL_FIELDS, coilSnapshotFromSpec(coil))}`);
