@@ -6,7 +6,7 @@
  * turns counted from the cold end; our own simple sketch) with its SPICE
  * netlist (the core's matchNetlist) to copy or download.
  */
-import { createDeferred, createEffect, createMemo, createSignal, For, onCleanup, Show } from 'solid-js';
+import { createEffect, createMemo, createSignal, For, onCleanup, Show, untrack } from 'solid-js';
 import { isDesignError } from '../../src/core/errors';
 import type { MatchOptionKind } from '../../src/core/matching';
 import { matchNetlist } from '../../src/core/matchNetlist';
@@ -19,15 +19,34 @@ import { mm, planAnswer, planOption, sayDb, sayTurns, turnsText, type BuiltOptio
 
 const tickHz = (x: number | null) => (x == null || !Number.isFinite(x) ? '' : formatQuantityCompact(x, 'Hz', 4));
 
+/** How long the typing must pause before the curves follow it, ms. */
+const PAUSE = 250;
+
+/**
+ * A value that follows `source` once it has stood still for PAUSE ms (a
+ * timer of our own: Solid's createDeferred would bring its scheduler into
+ * the runtime every page loads). Starts at the source's value.
+ */
+function afterPause<T>(source: () => T, same: (a: T, b: T) => boolean): () => T {
+  const [value, setValue] = createSignal(source());
+  createEffect(() => {
+    const next = source();
+    if (same(next, untrack(value))) return;
+    const timer = setTimeout(() => setValue(() => next), PAUSE);
+    onCleanup(() => clearTimeout(timer));
+  });
+  return value;
+}
+
 /**
  * Return loss at the antenna against frequency: one curve per option, and the
  * antenna straight across (dashed). The sweeps (every option over 201 points)
- * are the heaviest work on the bench, so the curves follow the typing when
- * the browser is idle (Solid's createDeferred), marked stale until they have;
+ * are the heaviest work on the bench, so the curves follow the typing after a
+ * pause (afterPause), marked stale until they have;
  * a value the core refuses leaves the last curves, stale (its field says why).
  */
 export function ReturnLossPlot(props: { bench: BenchState }) {
-  const values = createDeferred(() => ({ raw: props.bench.spec(), choices: props.bench.choices() }), { timeoutMs: 300 });
+  const values = afterPause(() => ({ raw: props.bench.spec(), choices: props.bench.choices() }), (a, b) => a.raw === b.raw && a.choices === b.choices);
   const run = createMemo<{ curves?: ReturnLossCurves; ok: boolean }>((last) => {
     const { raw, choices } = values();
     if (!raw) return { curves: last?.curves, ok: false };
