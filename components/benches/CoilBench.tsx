@@ -335,12 +335,11 @@ function CoilResults(props: { bench: BenchState; formulas: CoilFormulas; onAnswe
             <Show when={form() === 'multilayer'}>
               <p class="tw-coil-detail">No Q is estimated for a multilayer coil: set the tank’s coil Q from a measurement.</p>
             </Show>
-            <Show when={matchHref()}>
-              <p>
-                <a id="to-match" href={matchHref()}>Match an antenna and the next stage to it on the Match bench</a>{' '}
-                <span class="tw-coil-detail">({form() === 'solenoid' ? 'carries the winding, so taps and links are found from its geometry' : 'carries its inductance: taps need a single-layer coil'}; tuned to f)</span>
-              </p>
-            </Show>
+            {/* In the server's page too (the bare bench until the link's code arrives), so hydration keeps the page as served. */}
+            <p>
+              <a id="to-match" href={matchHref() ?? '/match/'}>Match an antenna and the next stage to it on the Match bench</a>{' '}
+              <span class="tw-coil-detail">({form() === 'solenoid' ? 'carries the winding, so taps and links are found from its geometry' : 'carries its inductance: taps need a single-layer coil'}; tuned to f)</span>
+            </p>
           </Show>
         </section>
         </Later>

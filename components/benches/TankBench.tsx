@@ -331,8 +331,8 @@ function TankBenchParts(outer: BenchParts<TankFormulas>) {
           <section class="tank-collapse" id="collapse" aria-labelledby="collapse-title" classList={{ 'tw-result--stale': stale() }}>
             <h3 id="collapse-title">A tap or a link winding is needed</h3>
             <p>{collapse()!.message}</p>
-            <Show when={matchHref()}>
-              <p><a id="to-match" href={matchHref()}>Find the tap, divider, link or L-network on the Match bench</a> (carries this tank’s L, C, unloaded Q, source and load).</p>
+            <Show when={shownMode() === 'parallel'}>
+              <p><a id="to-match" href={matchHref() ?? '/match/'}>Find the tap, divider, link or L-network on the Match bench</a> (carries this tank’s L, C, unloaded Q, source and load).</p>
             </Show>
             <p>More on the method page: <a href={MATCHING_HREF}>when the terminations collapse the tank</a>.</p>
           </section>

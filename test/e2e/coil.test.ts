@@ -436,7 +436,8 @@ describe.runIf(browserAvailable())('Coil bench in Chromium', () => {
     const { page, errors } = await openPage(env.browser, `${env.site.origin}/coil/?${query}`);
     await hydrated(page);
     const toMatch = page.locator('#to-match');
-    await toMatch.waitFor();
+    // the bare bench's address at first, the full link once its code has arrived
+    await expect.poll(async () => (await toMatch.getAttribute('href')) ?? '').toMatch(/^\/match\/\?/);
     const match = await openPage(env.browser, `${env.site.origin}${(await toMatch.getAttribute('href'))!}`);
     await hydrated(match.page);
     expect(await match.page.locator('.tw-link-notices').count()).toBe(0);

@@ -161,7 +161,8 @@ describe.runIf(browserAvailable())('Tank bench in Chromium', () => {
     expect(await page.locator('.tw-notes').getByText('collapse the tank').count()).toBe(0);
     // the Match bench link carries the tank: opened, it shows the same collapse straight across (no notices)
     const toMatch = box.locator('#to-match');
-    await toMatch.waitFor();
+    // the bare bench's address at first, the full link once its code has arrived
+    await expect.poll(async () => (await toMatch.getAttribute('href')) ?? '').toMatch(/^\/match\/\?/);
     const match = await openPage(env.browser, `${env.site.origin}${(await toMatch.getAttribute('href'))!}`);
     await hydrated(match.page);
     expect(await match.page.locator('.tw-link-notices').count()).toBe(0);
