@@ -76,10 +76,12 @@ function MatchBenchParts(outer: BenchParts<MatchFormulas>) {
             <legend>Goal</legend>
             <Fields bench={bench} names={MATCH_GROUPS.goal} />
           </fieldset>
-          <fieldset class="match-group">
-            <legend>Link winding (optional)</legend>
-            <Fields bench={bench} names={MATCH_GROUPS.link} />
-          </fieldset>
+          <Show when={bench.choice('coilBy') === 'solenoid'}>
+            <fieldset class="match-group">
+              <legend>Link winding (optional)</legend>
+              <Fields bench={bench} names={MATCH_GROUPS.link} />
+            </fieldset>
+          </Show>
         </Later>
         <Show when={bench.generalError()}>
           <p class="tw-bench-error" role="alert">{bench.generalError()}</p>

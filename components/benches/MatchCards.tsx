@@ -17,7 +17,7 @@ import type { Computed } from '../kit/compute';
 import { Field } from '../kit/Field';
 import { Formula } from '../kit/Formula';
 import { Later } from '../kit/Later';
-import { NoteList } from '../kit/Note';
+import { Note, NoteList } from '../kit/Note';
 import { ResultRow } from '../kit/ResultRow';
 import type { MatchFormulas } from './MatchBench';
 import { NearPart } from './matchNear';
@@ -86,12 +86,22 @@ export default function MatchCards(props: { bench: BenchState; formulas: MatchFo
             </p>
           </Show>
         </ResultRow>
+        <Show when={p()?.overcoupled && p()!.recommended}>
+          <Note level="info">
+            <span id="out-overcoupled">
+              To bring the loaded Q down to {sayQ(d()!.goal.loadedQ!)} the antenna is coupled more tightly than a match (a match gives a loaded Q of
+              {' '}{sayQ(p()!.overcoupled!.matchedQ)} here): it sees about {ohm(p()!.recommended!.estimate.inputResistance)} instead of its own {ohm(p()!.spec.sourceResistance)},
+              {' '}and the mismatch costs {sayDb(p()!.recommended!.response.mismatchLoss)} in the full circuit. For less loss ask for a loaded Q nearer {sayQ(p()!.overcoupled!.matchedQ)}, or let the
+              next stage load the tank more (a lower input resistance, or its tap higher up the coil).
+            </span>
+          </Note>
+        </Show>
         <Show when={load()}>
-          <ResultRow id="out-loadtap" label={load()!.tap ? 'Load tap, turns from the cold end' : 'Load across the top'} value={load()!.tap?.practicalTapTurns} significant={turnFigures(load()!.tap?.practicalTapTurns)} stale={stale()}>
+          <ResultRow id="out-loadtap" label={load()!.tap ? 'Load tap, turns from the cold end' : 'Load across the top'} value={load()!.tap ? load()!.tap!.practicalTapTurns : load()!.resistance} unit={load()!.tap ? undefined : 'Ω'} significant={load()!.tap ? turnFigures(load()!.tap!.practicalTapTurns) : 3} stale={stale()}>
             <p class="tw-formula-meta" id="out-loadtap-detail">
               {load()!.tap
                 ? `${p()!.spec.loadTapTurns === undefined ? `Exactly ${load()!.tap!.tapTurns.toFixed(2)} turns; the nearest half turn` : 'The tap given'} steps ${ohm(load()!.resistance)} up ${load()!.tap!.stepUp.toFixed(3)}× to ${ohm(load()!.presentedResistance)} across the tank, the same for every option below.`
-                : `${ohm(load()!.resistance)} straight across the tank, the same for every option below.`}
+                : 'Straight across the tank, the same for every option below.'}
             </p>
           </ResultRow>
         </Show>

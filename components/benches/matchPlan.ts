@@ -175,6 +175,21 @@ export interface MatchPlan {
   meetsGoal: boolean;
   /** The options worked out on the way, by kind. */
   tried: Partial<Record<MatchOptionKind, MatchOption>>;
+  /** When the loaded Q asked needs the antenna coupled more tightly than a match: the loaded Q a match would give here. */
+  overcoupled?: { matchedQ: number };
+}
+
+/**
+ * The loaded Q with the antenna matched to the rest of the tank (its own loss
+ * and the load as placed): G′ₛ = G_D + G′_load, so
+ * Q_L = 1/(ω₀L · 2 (G_D + G′_load)) by the high-Q rules (Pozar). A loaded Q
+ * asked below it couples the antenna more tightly than a match: the antenna
+ * then sees less than its own resistance and the mismatch costs loss.
+ */
+export function matchedLoadedQ(design: MatchDesign): number {
+  const t = design.tank;
+  const gl = design.load ? 1 / design.load.presentedResistance : 0;
+  return 1 / (t.reactance * 2 * (1 / t.dynamicResistance + gl));
 }
 
 /**
@@ -209,7 +224,13 @@ export function planAnswer(raw: SpecObject, choices: Choices): MatchPlan {
   }
   const d = design as MatchDesign;
   const tuned = choices.tune === 'f' ? spec.capacitance : undefined;
-  return { spec, design: d, ...(tuned === undefined ? {} : { tuningCapacitance: tuned }), ...(best ? { recommended: best } : {}), meetsGoal: !!best && meetsGoal(best, d.goal), tried };
+  const matchedQ = matchedLoadedQ(d);
+  // (with the load's tap designed for an equal share the antenna is never more than matched)
+  const overcoupled = d.goal.loadedQ !== undefined && d.goal.loadedQ < matchedQ * (1 - 1e-9);
+  return {
+    spec, design: d, ...(tuned === undefined ? {} : { tuningCapacitance: tuned }), ...(best ? { recommended: best } : {}),
+    meetsGoal: !!best && meetsGoal(best, d.goal), tried, ...(overcoupled ? { overcoupled: { matchedQ } } : {}),
+  };
 }
 
 /** The kinds in the order the core sets them out (the table's rows). */

@@ -225,6 +225,23 @@ describe('Match plan', () => {
     expect(o.response.returnLoss).toBeGreaterThanOrEqual(10);
   });
 
+  it('a loaded Q below what a match gives couples the antenna more tightly than a match: said, with the match’s loaded Q 1/(ω₀L · 2(G_D + G_load)) (Pozar)', async () => {
+    const { plan } = await run(stateOf({ coilBy: 'L' }, { Lc: '4.7u', Qu: '150', Rload: '100k', QL: '12' }));
+    const t = plan!.design.tank;
+    const matched = 1 / (TWO_PI * t.frequency * t.inductance * 2 * (1 / t.dynamicResistance + 1 / 100e3));
+    expect(rel(plan!.overcoupled!.matchedQ, matched)).toBeLessThan(1e-12);
+    expect(matched).toBeGreaterThan(12);
+    // the antenna then sees the rest of the tank stepped down by n² = R′/R_s, more than its own 50 Ω (Terman 1943), and the mismatch costs loss
+    const rest = 1 / (1 / t.dynamicResistance + 1 / 100e3);
+    const seen = (50 * rest) / plan!.design.sourceTarget;
+    expect(rel(plan!.recommended!.estimate.inputResistance, seen)).toBeLessThan(1e-12);
+    expect(seen).toBeGreaterThan(50);
+    expect(plan!.recommended!.response.mismatchLoss).toBeGreaterThan(1);
+    // asked above it: no such note; nor with the load's tap designed for an equal share
+    expect((await run(stateOf({ coilBy: 'L' }, { Lc: '4.7u', Qu: '150', Rload: '100k', QL: '100' }))).plan!.overcoupled).toBeUndefined();
+    expect((await run(stateOf({}))).plan!.overcoupled).toBeUndefined();
+  });
+
   it('a coil given by its inductance: no tap or link, the divider and L-network still match it', async () => {
     const { plan } = await run(stateOf({ coilBy: 'L' }, { Lc: '4.7u', Qu: '150' }));
     expect(plan!.tried.tap?.available).toBe(false);
