@@ -151,7 +151,9 @@ function MatchAnswer(props: ResultsProps) {
           <Summary items={items()!} stale={calc.stale()} />
         </Show>
       </Later>
-      <MatchCards bench={props.bench} formulas={props.formulas} calc={calc} />
+      <Later>
+        <MatchCards bench={props.bench} formulas={props.formulas} calc={calc} />
+      </Later>
     </>
   );
 }
