@@ -19,6 +19,7 @@
 import { DesignError, requireObject } from './errors';
 import { analyzeMatchCircuit, checkMatchCircuit, type MatchCircuit } from './matchCircuit';
 import { checkSweepOptions, type SweepOptions } from './sweep';
+import { netlistNames, num } from './netlist';
 import { sayQuantity } from './text';
 
 /** Options of `matchNetlist`. */
@@ -31,10 +32,6 @@ export interface MatchNetlistOptions {
   title?: string;
 }
 
-/** A number in SPICE syntax, 12 significant digits, exponent form. */
-function num(x: number): string {
-  return x.toExponential(11);
-}
 
 /**
  * Writes a SPICE netlist of the matched circuit, ready for `ngspice -b`.
@@ -46,12 +43,7 @@ function num(x: number): string {
 export function matchNetlist(circuit: MatchCircuit, options?: MatchNetlistOptions): string {
   const opts = options === undefined ? {} : requireObject<MatchNetlistOptions>('options', options, 'The netlist options');
   const { c, nodes } = checkMatchCircuit(circuit);
-  const dataFile = opts.dataFile ?? 'match-ac.data';
-  if (typeof dataFile !== 'string' || !/^[A-Za-z0-9._/-]+$/.test(dataFile)) {
-    throw new DesignError('dataFile', 'The data file name may use only letters, digits, dot, dash, underscore and slash (no spaces).');
-  }
-  if (opts.title !== undefined && typeof opts.title !== 'string') throw new DesignError('title', 'The title must be text.');
-  const title = (opts.title ?? 'Tankwright matched front end').replace(/[^\x20-\x7e]/g, ' ');
+  const { dataFile, title } = netlistNames(opts, 'match-ac.data', 'Tankwright matched front end');
   let sweep = opts.sweep;
   if (sweep === undefined) {
     const r = analyzeMatchCircuit(c);

@@ -28,8 +28,22 @@ export interface TankNetlistOptions {
 }
 
 /** A number in SPICE syntax, 12 significant digits, exponent form. */
-function num(x: number): string {
+export function num(x: number): string {
   return x.toExponential(11);
+}
+
+/**
+ * The data file and title of a netlist's options, checked: a file name of
+ * letters, digits, dot, dash, underscore and slash; a title as one ASCII line.
+ * @throws DesignError at 'dataFile' or 'title'
+ */
+export function netlistNames(opts: { dataFile?: unknown; title?: unknown }, defaultFile: string, defaultTitle: string): { dataFile: string; title: string } {
+  const dataFile = opts.dataFile ?? defaultFile;
+  if (typeof dataFile !== 'string' || !/^[A-Za-z0-9._\/-]+$/.test(dataFile)) {
+    throw new DesignError('dataFile', 'The data file name may use only letters, digits, dot, dash, underscore and slash (no spaces).');
+  }
+  if (opts.title !== undefined && typeof opts.title !== 'string') throw new DesignError('title', 'The title must be text.');
+  return { dataFile, title: ((opts.title as string | undefined) ?? defaultTitle).replace(/[^\x20-\x7e]/g, ' ') };
 }
 
 /**
@@ -47,14 +61,7 @@ function num(x: number): string {
 export function tankNetlist(tank: TankInput, options?: TankNetlistOptions): string {
   const opts = options === undefined ? {} : requireObject<TankNetlistOptions>('options', options, 'The netlist options');
   const t = resolveTank(tank);
-  const dataFile = opts.dataFile ?? 'tank-ac.data';
-  if (typeof dataFile !== 'string' || !/^[A-Za-z0-9._\/-]+$/.test(dataFile)) {
-    throw new DesignError('dataFile', 'The data file name may use only letters, digits, dot, dash, underscore and slash (no spaces).');
-  }
-  if (opts.title !== undefined && typeof opts.title !== 'string') {
-    throw new DesignError('title', 'The title must be text.');
-  }
-  const title = (opts.title ?? `Tankwright ${t.mode} tank`).replace(/[^\x20-\x7e]/g, ' ');
+  const { dataFile, title } = netlistNames(opts, 'tank-ac.data', `Tankwright ${t.mode} tank`);
 
   let sweep = opts.sweep;
   if (sweep === undefined) {

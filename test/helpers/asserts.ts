@@ -3,6 +3,7 @@
  */
 import { expect } from 'vitest';
 import { isDesignError } from '../../src/core/errors';
+import { QuantityError } from '../../src/quantity';
 
 /**
  * Relative difference |a − b| / |b|. Zero when both are zero; Infinity when
@@ -36,4 +37,15 @@ export function expectSI(actual: number, expected: number, tolerance = 1e-12): v
 /** Thomson's formula, f = 1 / (2π √(LC)), written here independently of the core (Terman 1943, section 3). */
 export function thomson(inductance: number, capacitance: number): number {
   return 1 / (2 * Math.PI * Math.sqrt(inductance * capacitance));
+}
+
+/** The QuantityError `fn` throws; fails the test when it throws anything else or nothing. */
+export function refusal(fn: () => unknown): QuantityError {
+  try {
+    fn();
+  } catch (e) {
+    expect(e).toBeInstanceOf(QuantityError);
+    return e as QuantityError;
+  }
+  throw new Error('accepted');
 }

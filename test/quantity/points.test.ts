@@ -9,18 +9,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { formatQuantityCompact, parseQuantityPoints, POSITIVE, QuantityError, MAX_POINTS_LENGTH } from '../../src/quantity';
+import { refusal } from '../helpers/asserts';
 import { specToSnapshot } from '../../components/kit/documents';
 import { defineFields } from '../../components/kit/fields';
 
-function refusal(fn: () => unknown): QuantityError {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(QuantityError);
-    return e as QuantityError;
-  }
-  throw new Error('accepted');
-}
 
 const DEG = { min: -3600, max: 3600, unit: '°' };
 

@@ -11,17 +11,9 @@ import {
   formatQuantity, looksLikeRange, parseQuantity, parseQuantityRange, parseQuantityRangeAsync, POSITIVE, QuantityError, splitRange,
   type QuantityUnit,
 } from '../../src/quantity';
+import { refusal } from '../helpers/asserts';
 import { expectSI } from '../helpers/asserts';
 
-function refusal(fn: () => unknown): QuantityError {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(QuantityError);
-    return e as QuantityError;
-  }
-  throw new Error('accepted');
-}
 
 describe('parseQuantityRange', () => {
   it.each([
